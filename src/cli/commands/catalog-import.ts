@@ -1,0 +1,37 @@
+import { existsSync } from 'node:fs';
+import { formatFromPath, importPartsFile, formatRowIssue, type ImportResult } from '../../catalog/index.js';
+import { UsageError } from '../cli-error.js';
+import { withCatalog, type CatalogOptions } from '../catalog-session.js';
+import { changeAuthor } from '../user-name.js';
+
+export interface ImportCommandOptions extends CatalogOptions {
+  readonly format?: string;
+  readonly skipInvalid?: boolean;
+  readonly by?: string;
+}
+
+export type ImportOutcome = Extract<ImportResult, { ok: true }> & { file: string; catalogPath: string };
+
+export function runCatalogImport(file: string, options: ImportCommandOptions): ImportOutcome {
+  const format = formatFromPath(file, options.format);
+  if (!format) {
+    throw new UsageError(`cannot tell the format of ${file}`, 'name a .csv or .json file, or give --format csv or --format json');
+  }
+  if (!existsSync(file)) throw new UsageError(`no file ${file}`, 'check the path');
+  return withCatalog({ ...options, create: true }, (catalog) => {
+    const result = importPartsFile(catalog, file, format, {
+      by: changeAuthor(options.by),
+      ...(options.skipInvalid ? { skipInvalid: true } : {}),
+    });
+    if (!result.ok) {
+      const count = result.issues.length;
+      throw new UsageError(
+        `${file}: ${count} problem${count === 1 ? '' : 's'}; nothing was imported`,
+        'fix the rows named above and import again, or add --skip-invalid to import only the good rows',
+        result.issues.map(formatRowIssue),
+        { issues: result.issues },
+      );
+    }
+    return { ...result, file, catalogPath: catalog.path };
+  });
+}

@@ -1,0 +1,192 @@
+import { thermalVoltage } from './constants.js';
+import { formatCelsius, formatNumber, formatSi } from './format.js';
+import { requireFinite, requirePositive } from './guards.js';
+
+/** A datasheet forward point: VF at IF and junction temperature. */
+export interface ForwardVoltagePoint {
+  readonly vfV: number;
+  readonly ifA: number;
+  readonly tjK: number;
+}
+
+export interface ForwardVoltageOptions {
+  /** Ideality used when the reference temperature has a single point (rectifiers near rated current run near high injection). @default 2 */
+  readonly defaultIdeality?: number;
+  /** VF tempco used when no two points share a current (Sedra & Smith, diode temperature dependence [published]). @default -0.002 */
+  readonly defaultTempcoVPerK?: number;
+}
+
+export type ForwardVoltageEstimate =
+  | {
+      readonly ok: true;
+      /** VF in volts. */
+      readonly value: number;
+      readonly method: string;
+      /** Temperature of the points the current step used. */
+      readonly referenceTjK: number;
+      /** Tempco applied from referenceTjK to the requested Tj; null when no temperature step was needed. */
+      readonly tempcoVPerK: number | null;
+      /** True when the current or the temperature lies outside the points. */
+      readonly isExtrapolated: boolean;
+    }
+  | {
+      readonly ok: false;
+      readonly code: 'no-points' | 'inconsistent-points';
+      readonly message: string;
+    };
+
+const DEFAULT_IDEALITY = 2;
+const DEFAULT_TEMPCO_V_PER_K = -0.002;
+/** Points closer than this are taken as one temperature. */
+const SAME_TEMPERATURE_K = 0.5;
+/** Relative current difference under which two points count as "the same current". */
+const SAME_CURRENT_REL = 0.01;
+
+interface TemperatureGroup {
+  readonly tjK: number;
+  /** Sorted by ascending current. */
+  readonly points: readonly ForwardVoltagePoint[];
+}
+
+/**
+ * VF at a current and junction temperature from datasheet points.
+ * Current: log law VF = V1 + s·ln(I/I1) between the nearest points at the reference temperature
+ * (s from the points when two exist, else n·VT with the default n). Temperature: the points' own
+ * tempco when two points share a current at different temperatures, else −2 mV/K.
+ */
+export function estimateForwardVoltage(
+  points: readonly ForwardVoltagePoint[],
+  ifA: number,
+  tjK: number,
+  options: ForwardVoltageOptions = {},
+): ForwardVoltageEstimate {
+  requirePositive('ifA', ifA);
+  requirePositive('tjK', tjK);
+  for (const p of points) {
+    requireFinite('point.vfV', p.vfV);
+    requirePositive('point.ifA', p.ifA);
+    requirePositive('point.tjK', p.tjK);
+  }
+  if (points.length === 0) {
+    return { ok: false, code: 'no-points', message: 'No forward-voltage points: VF cannot be estimated.' };
+  }
+  const reference = nearestGroup(groupByTemperature(points), tjK);
+  const atCurrent = estimateAtCurrent(reference, ifA, options.defaultIdeality ?? DEFAULT_IDEALITY);
+  if (!atCurrent.ok) return atCurrent;
+
+  const temperatures = points.map((p) => p.tjK);
+  const isTemperatureOutside = tjK < Math.min(...temperatures) - SAME_TEMPERATURE_K
+    || tjK > Math.max(...temperatures) + SAME_TEMPERATURE_K;
+  const deltaK = tjK - reference.tjK;
+  if (Math.abs(deltaK) < 1e-9) {
+    return {
+      ok: true,
+      value: atCurrent.vfV,
+      method: atCurrent.method,
+      referenceTjK: reference.tjK,
+      tempcoVPerK: null,
+      isExtrapolated: atCurrent.isExtrapolated,
+    };
+  }
+  const tempco = pointsTempco(points, ifA);
+  const tempcoVPerK = tempco?.vPerK ?? options.defaultTempcoVPerK ?? DEFAULT_TEMPCO_V_PER_K;
+  const tempcoMethod = tempco === null
+    ? `default tempco ${formatSi(tempcoVPerK, 'V/K')} (Sedra & Smith, diode temperature dependence)`
+    : `the points' own tempco ${formatSi(tempcoVPerK, 'V/K')} (${tempco.description})`;
+  return {
+    ok: true,
+    value: atCurrent.vfV + tempcoVPerK * deltaK,
+    method: `${atCurrent.method}; then ${formatCelsius(reference.tjK)} → ${formatCelsius(tjK)} with ${tempcoMethod}`,
+    referenceTjK: reference.tjK,
+    tempcoVPerK,
+    isExtrapolated: atCurrent.isExtrapolated || isTemperatureOutside,
+  };
+}
+
+function groupByTemperature(points: readonly ForwardVoltagePoint[]): TemperatureGroup[] {
+  const groups: { tjK: number; points: ForwardVoltagePoint[] }[] = [];
+  for (const p of points) {
+    const group = groups.find((g) => Math.abs(g.tjK - p.tjK) < SAME_TEMPERATURE_K);
+    if (group) group.points.push(p);
+    else groups.push({ tjK: p.tjK, points: [p] });
+  }
+  return groups.map((g) => ({ tjK: g.tjK, points: [...g.points].sort((x, y) => x.ifA - y.ifA) }));
+}
+
+/** Nearest temperature; ties go to the group with more points, then to the cooler one. */
+function nearestGroup(groups: readonly TemperatureGroup[], tjK: number): TemperatureGroup {
+  const ranked = [...groups].sort(
+    (a, b) => Math.abs(a.tjK - tjK) - Math.abs(b.tjK - tjK) || b.points.length - a.points.length || a.tjK - b.tjK,
+  );
+  return ranked[0]!;
+}
+
+type AtCurrent =
+  | { ok: true; vfV: number; method: string; isExtrapolated: boolean }
+  | { ok: false; code: 'inconsistent-points'; message: string };
+
+function estimateAtCurrent(group: TemperatureGroup, ifA: number, defaultIdeality: number): AtCurrent {
+  requirePositive('defaultIdeality', defaultIdeality);
+  const at = formatCelsius(group.tjK);
+  const exact = group.points.find((p) => Math.abs(p.ifA - ifA) <= 1e-9 * ifA);
+  if (exact) {
+    return { ok: true, vfV: exact.vfV, method: `datasheet point ${formatSi(exact.vfV, 'V')} at ${formatSi(exact.ifA, 'A')}, ${at}`, isExtrapolated: false };
+  }
+  const pts = group.points;
+  const isExtrapolated = ifA < pts[0]!.ifA || ifA > pts[pts.length - 1]!.ifA;
+  if (pts.length === 1) {
+    const p = pts[0]!;
+    const slope = defaultIdeality * thermalVoltage(group.tjK);
+    return {
+      ok: true,
+      vfV: p.vfV + slope * Math.log(ifA / p.ifA),
+      method: `log law from ${formatSi(p.vfV, 'V')} at ${formatSi(p.ifA, 'A')}, ${at}, with assumed n = ${formatNumber(defaultIdeality)} (${formatSi(slope * Math.LN10, 'V/decade')})`,
+      isExtrapolated,
+    };
+  }
+  const [a, b] = neighbours(pts, ifA);
+  const lnRatio = Math.log(b.ifA / a.ifA);
+  const slope = (b.vfV - a.vfV) / lnRatio;
+  if (!(lnRatio > 1e-9) || !(slope > 0)) {
+    return {
+      ok: false,
+      code: 'inconsistent-points',
+      message: `Forward points at ${at} do not rise with current (${formatSi(a.vfV, 'V')} at ${formatSi(a.ifA, 'A')}, ${formatSi(b.vfV, 'V')} at ${formatSi(b.ifA, 'A')}).`,
+    };
+  }
+  const ideality = slope / thermalVoltage(group.tjK);
+  return {
+    ok: true,
+    vfV: a.vfV + slope * Math.log(ifA / a.ifA),
+    method: `log law through ${formatSi(a.vfV, 'V')} at ${formatSi(a.ifA, 'A')} and ${formatSi(b.vfV, 'V')} at ${formatSi(b.ifA, 'A')}, ${at}: ${formatSi(slope * Math.LN10, 'V/decade')} (n ≈ ${formatNumber(ideality)})${isExtrapolated ? ', extrapolated (ignores series resistance)' : ''}`,
+    isExtrapolated,
+  };
+}
+
+/** The two points bracketing ifA, or the two nearest at the end it lies beyond. Needs ≥ 2 sorted points. */
+function neighbours(pts: readonly ForwardVoltagePoint[], ifA: number): [ForwardVoltagePoint, ForwardVoltagePoint] {
+  const upper = pts.findIndex((p) => p.ifA >= ifA);
+  const i = upper === -1 ? pts.length - 1 : Math.max(upper, 1);
+  return [pts[i - 1]!, pts[i]!];
+}
+
+/** Tempco from two points at one current and different temperatures: current nearest ifA (in log), then widest span. */
+function pointsTempco(points: readonly ForwardVoltagePoint[], ifA: number): { vPerK: number; description: string } | null {
+  let best: { cost: number; span: number; vPerK: number; description: string } | null = null;
+  for (const [i, p] of points.entries()) {
+    for (const q of points.slice(i + 1)) {
+      const span = Math.abs(q.tjK - p.tjK);
+      if (span < SAME_TEMPERATURE_K || Math.abs(q.ifA - p.ifA) > SAME_CURRENT_REL * Math.max(p.ifA, q.ifA)) continue;
+      const cost = Math.abs(Math.log(p.ifA / ifA));
+      if (best && (cost > best.cost + 1e-12 || (Math.abs(cost - best.cost) <= 1e-12 && span <= best.span))) continue;
+      const [cool, hot] = p.tjK < q.tjK ? [p, q] : [q, p];
+      best = {
+        cost,
+        span,
+        vPerK: (hot.vfV - cool.vfV) / (hot.tjK - cool.tjK),
+        description: `${formatSi(cool.vfV, 'V')} at ${formatCelsius(cool.tjK)} and ${formatSi(hot.vfV, 'V')} at ${formatCelsius(hot.tjK)}, both at ${formatSi(cool.ifA, 'A')}`,
+      };
+    }
+  }
+  return best && { vPerK: best.vPerK, description: best.description };
+}

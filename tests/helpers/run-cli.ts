@@ -1,0 +1,31 @@
+import { spawn, spawnSync } from 'node:child_process';
+import { join } from 'node:path';
+
+export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'src', 'cli', 'main.js');
+
+export interface CliRun {
+  readonly status: number | null;
+  readonly stdout: string;
+  readonly stderr: string;
+}
+
+/** Runs the built command line (npm test builds first) with its own catalog and data folder. */
+export function runCli(args: readonly string[], env: Record<string, string>, input?: string): CliRun {
+  const r = spawnSync(process.execPath, [CLI, ...args], {
+    env: { ...process.env, NO_COLOR: '1', ...env },
+    encoding: 'utf8',
+    input: input ?? '',
+  });
+  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+export function runCliAsync(args: readonly string[], env: Record<string, string>): Promise<CliRun> {
+  return new Promise((resolve) => {
+    const child = spawn(process.execPath, [CLI, ...args], { env: { ...process.env, NO_COLOR: '1', ...env } });
+    let stdout = '';
+    let stderr = '';
+    child.stdout.on('data', (d) => (stdout += d));
+    child.stderr.on('data', (d) => (stderr += d));
+    child.on('close', (status) => resolve({ status, stdout, stderr }));
+  });
+}
