@@ -9,3 +9,4 @@ export * from './part-file.js';
 export * from './part-repository.js';
 export * from './row-issue.js';
 export * from './package-root.js';
+export * from './policy-repository.js';

@@ -3,6 +3,7 @@ import { Command, CommanderError, Option } from 'commander';
 import { CatalogError, packageVersion } from '../catalog/index.js';
 import { EXIT, UsageError } from './cli-error.js';
 import { registerCatalogCommands } from './register-catalog.js';
+import { registerDesignCommands } from './register-design.js';
 import { runHome } from './commands/home.js';
 import { jsonDocument } from './output.js';
 
@@ -18,6 +19,7 @@ function buildProgram(): Command {
     await runHome(options);
   });
   registerCatalogCommands(program);
+  registerDesignCommands(program);
   return program;
 }
 

@@ -51,8 +51,9 @@ describe('opening a catalog', () => {
     ).run();
     db.close();
     const catalog = openCatalog(path);
-    expect(catalog.migrated).toEqual([2]);
-    expect(catalog.backupPath).toBe(`${path}.before-v2.bak`);
+    const later = loadMigrations().map((m) => m.version).filter((v) => v > 1);
+    expect(catalog.migrated).toEqual(later);
+    expect(catalog.backupPath).toBe(`${path}.before-v${latestSchemaVersion()}.bak`);
     const parts = listParts(catalog);
     expect(parts).toHaveLength(1);
     expect(parts[0]).toMatchObject({ partNumber: 'TW-OLD1', approval: 'pending', vrrmV: 1000, vfPoints: [{ vfV: 1.1, ifA: 1, tjK: 298.15 }] });

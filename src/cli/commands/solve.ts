@@ -1,0 +1,30 @@
+import { findPosition } from '../../circuits/design-file.js';
+import type { SolveResult } from '../../circuits/role.js';
+import { solvePosition } from '../../circuits/solve-position.js';
+import { UsageError } from '../cli-error.js';
+import type { CatalogOptions } from '../catalog-session.js';
+import { designError, loadDesign } from './design-file.js';
+import { teamPolicies } from './policies.js';
+
+export interface SolveOutcome {
+  readonly design: string;
+  readonly ref: string;
+  readonly role: string;
+  readonly policy: string;
+  readonly result: SolveResult;
+}
+
+/** Solves one position of a design file. An infeasible design is a result (exit 1), not an error. */
+export function runSolve(file: string, ref: string | undefined, options: CatalogOptions = {}): SolveOutcome {
+  const design = loadDesign(file);
+  if (!ref) {
+    throw new UsageError('which position? name it with --ref', `positions in ${file}: ${design.positions.map((p) => p.ref).join(', ')}`);
+  }
+  const position = findPosition(design, ref);
+  if (!position) {
+    throw new UsageError(`no position ${ref} in ${file}`, `use one of ${design.positions.map((p) => p.ref).join(', ')}`);
+  }
+  const outcome = solvePosition(design, position, teamPolicies(options));
+  if (!outcome.ok) throw designError(file, outcome.issues);
+  return { design: file, ref: position.ref, role: position.role, policy: outcome.policy.id, result: outcome.result };
+}
