@@ -6,7 +6,9 @@ export type CatalogErrorCode =
   | 'too-new'
   | 'damaged'
   | 'unknown-part'
-  | 'ambiguous-part';
+  | 'ambiguous-part'
+  | 'invalid-change'
+  | 'unknown-group';
 
 export class CatalogError extends Error {
   constructor(

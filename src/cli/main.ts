@@ -1,13 +1,24 @@
 #!/usr/bin/env node
 import { Command, CommanderError, Option } from 'commander';
-import { CatalogError, packageVersion } from '../catalog/index.js';
+import { CatalogError } from '../catalog/catalog-error.js';
+import { packageVersion } from '../catalog/package-root.js';
 import { EXIT, UsageError } from './cli-error.js';
-import { registerCatalogCommands } from './register-catalog.js';
-import { registerDesignCommands } from './register-design.js';
-import { runHome } from './commands/home.js';
 import { jsonDocument } from './output.js';
 
-function buildProgram(): Command {
+/** Command groups and the module that registers them; only the one asked for is loaded. */
+const GROUPS: Record<string, () => Promise<(program: Command) => void>> = {
+  catalog: async () => (await import('./register-catalog.js')).registerCatalogCommands,
+  design: async () => (await import('./register-design.js')).registerDesignCommands,
+};
+const GROUP_OF: Record<string, string> = {
+  catalog: 'catalog',
+  roles: 'design',
+  solve: 'design',
+  policies: 'design',
+  junction: 'design',
+};
+
+async function buildProgram(argv: readonly string[]): Promise<Command> {
   const program = new Command('headroom')
     .description('Choose diodes from circuit conditions, with every limit derived and every candidate explained.')
     .version(packageVersion(), '-V, --version')
@@ -16,18 +27,22 @@ function buildProgram(): Command {
     .showHelpAfterError('(run headroom --help for usage)')
     .exitOverride();
   program.action(async (options: { catalog?: string; demo?: boolean }) => {
+    const { runHome } = await import('./commands/home.js');
     await runHome(options);
   });
-  registerCatalogCommands(program);
-  registerDesignCommands(program);
+  // Start-up pays only for the command group in use; help and unknown words load them all.
+  const words = argv.slice(2).filter((a, i, all) => !a.startsWith('-') && all[i - 1] !== '--catalog');
+  const group = words[0] !== undefined ? GROUP_OF[words[0]] : undefined;
+  const wanted = group ? [group] : words.length === 0 && !argv.some((a) => a === '--help' || a === '-h') ? [] : Object.keys(GROUPS);
+  for (const name of wanted) (await GROUPS[name]!())(program);
   return program;
 }
 
 /** One top-level catch: every expected failure becomes a message, a next step and an exit code. */
 async function main(argv: string[]): Promise<number> {
-  const program = buildProgram();
   const wantsJson = argv.includes('--json');
   try {
+    const program = await buildProgram(argv);
     await program.parseAsync(argv);
     return process.exitCode === undefined ? EXIT.ok : Number(process.exitCode);
   } catch (error) {

@@ -21,4 +21,4 @@ export function jsonDocument(command: string, data: object): string {
   return JSON.stringify({ format: 'headroom-output', version: JSON_OUTPUT_VERSION, command, ...data }, null, 2);
 }
 
-export { safeText } from '../parts/index.js';
+export { safeText } from '../parts/safe-text.js';

@@ -1,7 +1,14 @@
 import type { Command } from 'commander';
 import { runCatalogAdd } from './commands/catalog-add.js';
 import { runCatalogExport } from './commands/catalog-export.js';
-import { runCatalogImport } from './commands/catalog-import.js';
+import { ImportConflictError, runCatalogImport } from './commands/catalog-import.js';
+import { EXIT } from './cli-error.js';
+import { printConflicts } from './print/import-summary.js';
+import { runCatalogApproval, runCatalogHistory } from './commands/catalog-approval.js';
+import { runGroupDeclare, runGroupLeave, runGroupList, runGroupShow } from './commands/catalog-groups.js';
+import { runCatalogDiff } from './commands/catalog-diff.js';
+import { printDiff, printGroup, printGroupList, printHistory } from './print/catalog-team.js';
+import { isEmptyDiff } from '../parts/index.js';
 import { runCatalogInfo } from './commands/catalog-info.js';
 import { runCatalogList } from './commands/catalog-list.js';
 import { runCatalogShow } from './commands/catalog-show.js';
@@ -14,20 +21,29 @@ import { encodePartCells } from '../catalog/index.js';
 type Opts = Record<string, string | boolean | undefined>;
 
 export function registerCatalogCommands(program: Command): void {
-  const catalog = program.command('catalog').description('keep the parts catalog: import, export, list, show, add');
+  const catalog = program.command('catalog').description('keep the parts catalog and the approved-parts list');
 
   catalog
     .command('import <file>')
     .description('add or update parts from a CSV or JSON file; nothing is written if any row is bad')
     .option('--format <format>', 'csv or json (default: from the file name)')
     .option('--skip-invalid', 'write the good rows and report the bad ones')
+    .option('--keep-local', 'where a part changed both here and in the file, keep this catalog\'s version')
+    .option('--overwrite-local', 'where a part changed both here and in the file, take the file\'s version')
     .option('--by <name>', 'who the change is recorded as (default: your OS user)')
     .option('--json', 'write the result as JSON')
     .action((file: string, _o: Opts, cmd: Command) => {
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
-      const result = runCatalogImport(file, o);
-      out.write(out.json ? jsonDocument('catalog import', result) : printImportSummary(result));
+      try {
+        const result = runCatalogImport(file, o);
+        out.write(out.json ? jsonDocument('catalog import', result) : printImportSummary(result));
+      } catch (error) {
+        if (!(error instanceof ImportConflictError)) throw error;
+        if (out.json) out.write(jsonDocument('catalog import', { ok: false, conflicts: error.conflicts }));
+        out.note(printConflicts(error));
+        process.exitCode = EXIT.checkFailed;
+      }
     });
 
   catalog
@@ -87,5 +103,76 @@ export function registerCatalogCommands(program: Command): void {
       const out = makeOutput(Boolean(o.json));
       const info = runCatalogInfo(o);
       out.write(out.json ? jsonDocument('catalog info', info) : `Catalog ${info.path}\n  schema version ${info.schemaVersion}\n  ${info.parts} parts`);
+    });
+
+  catalog
+    .command('approval <part> <state>')
+    .description('change a part\'s approval state (preferred, approved, conditional, pending, banned), with its reason')
+    .option('--reason <text>', 'why: recorded in the part\'s history (required)')
+    .option('--condition <text>', 'the condition of a conditional approval, e.g. "only below 60 °C ambient"')
+    .option('--by <name>', 'who the change is recorded as (default: your OS user)')
+    .option('--json', 'write the change as JSON')
+    .action((reference: string, state: string, _o: Opts, cmd: Command) => {
+      const o = cmd.optsWithGlobals();
+      const out = makeOutput(Boolean(o.json));
+      const { part, event } = runCatalogApproval(reference, state, o);
+      out.write(out.json ? jsonDocument('catalog approval', { part, event }) : `${part.manufacturer} ${part.partNumber}: ${event.fromState} → ${event.toState}. Recorded as ${event.by} at ${event.at}.`);
+    });
+
+  catalog
+    .command('history <part>')
+    .description('the approval trail of a part, oldest first (append-only)')
+    .option('--json', 'write the trail as JSON')
+    .action((reference: string, _o: Opts, cmd: Command) => {
+      const o = cmd.optsWithGlobals();
+      const out = makeOutput(Boolean(o.json));
+      const { part, events } = runCatalogHistory(reference, o);
+      out.write(out.json ? jsonDocument('catalog history', { part, events }) : printHistory(part, events));
+    });
+
+  catalog
+    .command('groups')
+    .description('second-source groups with how many fields differ between their members')
+    .option('--json', 'write the groups as JSON')
+    .action((_o: Opts, cmd: Command) => {
+      const o = cmd.optsWithGlobals();
+      const out = makeOutput(Boolean(o.json));
+      const groups = runGroupList(o);
+      out.write(out.json ? jsonDocument('catalog groups', { groups }) : printGroupList(groups));
+    });
+
+  catalog
+    .command('group <name> [parts...]')
+    .description('show a second-source group and what differs between its members; with parts, declare them interchangeable')
+    .option('--json', 'write the group as JSON')
+    .action((groupName: string, parts: string[], _o: Opts, cmd: Command) => {
+      const o = cmd.optsWithGlobals();
+      const out = makeOutput(Boolean(o.json));
+      if (parts.length === 0) {
+        const group = runGroupShow(groupName, o);
+        return out.write(out.json ? jsonDocument('catalog group', { group }) : printGroup(group));
+      }
+      const { group, moved } = runGroupDeclare(groupName, parts, o);
+      const notes = moved.map((p) => `Moved ${p.partNumber} out of group ${p.secondSourceGroup}.`);
+      out.write(out.json ? jsonDocument('catalog group', { group, moved }) : [...notes, printGroup(group)].join('\n'));
+    });
+
+  catalog
+    .command('ungroup <part>')
+    .description('take a part out of its second-source group')
+    .action((reference: string, _o: Opts, cmd: Command) => {
+      const { part, dissolved } = runGroupLeave(reference, cmd.optsWithGlobals());
+      process.stdout.write(`${part.partNumber} left its group.${dissolved ? ` Group ${dissolved} had one member left and was dissolved.` : ''}\n`);
+    });
+
+  catalog
+    .command('diff <before> <after>')
+    .description('compare two exports (.csv/.json) or catalog files (.sqlite): added, removed, changed, approval moves; exit 1 if they differ')
+    .option('--json', 'write the differences as JSON')
+    .action((before: string, after: string, _o: Opts, cmd: Command) => {
+      const out = makeOutput(Boolean(cmd.optsWithGlobals().json));
+      const outcome = runCatalogDiff(before, after);
+      out.write(out.json ? jsonDocument('catalog diff', outcome) : printDiff(outcome));
+      if (!isEmptyDiff(outcome.diff)) process.exitCode = EXIT.checkFailed;
     });
 }

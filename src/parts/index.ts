@@ -5,3 +5,5 @@ export * from './part-fields.js';
 export * from './describe-part.js';
 export * from './safe-text.js';
 export * from './headline.js';
+export * from './part-differences.js';
+export * from './diff-parts.js';
