@@ -14,3 +14,7 @@ export * from './approval-repository.js';
 export * from './group-repository.js';
 export * from './load-parts-source.js';
 export * from './import-conflicts.js';
+export * from './replacements.js';
+export * from './bom.js';
+export * from './audit-design.js';
+export * from './check-catalog.js';

@@ -25,7 +25,7 @@ const FORM = `{"format": "${JSON_FORMAT_NAME}", "version": ${JSON_FORMAT_VERSION
  */
 export function readJsonRecords(file: string, text: string): RecordsRead {
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text.replace(/^\uFEFF/, ''), { lineCounter, strict: true, uniqueKeys: true });
+  const doc = parseDocument(text.replace(/^\uFEFF/, ''), { lineCounter, strict: true, uniqueKeys: true, logLevel: 'error' });
   if (doc.errors.length > 0) {
     return { records: [], isUnreadable: true, issues: doc.errors.map((e) => ({ file, line: e.linePos?.[0]?.line ?? 0, column: '', value: '', message: `not readable as JSON: ${e.message.split('\n')[0]}`, expected: FORM })) };
   }

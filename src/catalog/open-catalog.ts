@@ -91,6 +91,9 @@ export function openCatalog(path: string, options: OpenOptions = {}): Catalog {
     }
     if (!isMemory) db.pragma('journal_mode = WAL');
     db.pragma('synchronous = NORMAL');
+    // Every write to a table with triggers (part, for search) keeps a statement journal; in a
+    // temporary file that costs about a quarter of a large import (bench/README.md).
+    db.pragma('temp_store = MEMORY');
     db.pragma('foreign_keys = ON');
     let backupPath: string | undefined;
     const current = db.pragma('user_version', { simple: true }) as number;

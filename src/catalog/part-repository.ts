@@ -2,6 +2,7 @@ import { PART_KINDS, type ApprovalState, type Part, type PartKind } from '../par
 import { CatalogError } from './catalog-error.js';
 import type { Catalog } from './open-catalog.js';
 import { ROW_COLUMNS, comparePartIdentity, partToRow, rowToPart, type PartRow } from './part-rows.js';
+import { deferSearchIndex } from './search/bulk-index.js';
 
 export interface WriteSummary {
   readonly added: number;
@@ -42,6 +43,8 @@ export function writeParts(catalog: Catalog, parts: readonly Part[], context: Wr
   const event = db.prepare(EVENT_SQL);
   const at = context.at ?? new Date().toISOString();
   const run = db.transaction(() => {
+    // A large write indexes its new parts for search in one statement at the end.
+    const finishSearchIndex = deferSearchIndex(db, parts.length);
     let added = 0;
     let updated = 0;
     let unchanged = 0;
@@ -62,6 +65,7 @@ export function writeParts(catalog: Catalog, parts: readonly Part[], context: Wr
         updated++;
       }
     }
+    finishSearchIndex();
     return { added, updated, unchanged };
   });
   return run.immediate();

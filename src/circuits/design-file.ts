@@ -44,7 +44,7 @@ const POSITION_KEYS = new Set(['ref', 'role', 'policy', 'rth_ja', 'part', 'notes
 /** Reads a design file's text. Comments are allowed (YAML); every problem names its line and field. */
 export function readDesignText(file: string, text: string): DesignReadResult {
   const lineCounter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false });
+  const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, logLevel: 'error' });
   const lineOf = (node: unknown) => {
     const range = (node as Node | undefined)?.range;
     return range ? lineCounter.linePos(range[0]).line : 0;
@@ -52,12 +52,12 @@ export function readDesignText(file: string, text: string): DesignReadResult {
   const issues: DesignIssue[] = [];
   const add = (line: number, field: string, message: string, expected = '') => issues.push({ file, line, field, message, expected });
   if (doc.errors.length > 0) {
-    for (const e of doc.errors) add(e.linePos?.[0]?.line ?? 0, '', `not readable as YAML: ${e.message.split('\n')[0]}`, FORM);
+    for (const e of doc.errors) add(Math.max(1, e.linePos?.[0]?.line ?? lineCounter.linePos(e.pos[0]).line), '', `not readable as YAML: ${e.message.split('\n')[0]}`, FORM);
     return { ok: false, issues };
   }
   const root = doc.contents;
   if (!isMap(root)) {
-    add(lineOf(root), '', 'the file must be a mapping of keys to values', FORM);
+    add(lineOf(root) || 1, '', 'the file must be a mapping of keys to values', FORM);
     return { ok: false, issues };
   }
   const top = root.toJSON() as Record<string, unknown>;

@@ -4,18 +4,23 @@ import { CatalogError } from '../catalog/catalog-error.js';
 import { packageVersion } from '../catalog/package-root.js';
 import { EXIT, UsageError } from './cli-error.js';
 import { jsonDocument } from './output.js';
+import { prepareDemoCatalog } from './catalog-session.js';
 
 /** Command groups and the module that registers them; only the one asked for is loaded. */
 const GROUPS: Record<string, () => Promise<(program: Command) => void>> = {
   catalog: async () => (await import('./register-catalog.js')).registerCatalogCommands,
   design: async () => (await import('./register-design.js')).registerDesignCommands,
+  pick: async () => (await import('./register-pick.js')).registerPickCommand,
 };
 const GROUP_OF: Record<string, string> = {
   catalog: 'catalog',
+  pick: 'pick',
   roles: 'design',
   solve: 'design',
   policies: 'design',
   junction: 'design',
+  swap: 'design',
+  audit: 'design',
 };
 
 async function buildProgram(argv: readonly string[]): Promise<Command> {
@@ -43,6 +48,7 @@ async function main(argv: string[]): Promise<number> {
   const wantsJson = argv.includes('--json');
   try {
     const program = await buildProgram(argv);
+    if (argv.includes('--demo')) await prepareDemoCatalog();
     await program.parseAsync(argv);
     return process.exitCode === undefined ? EXIT.ok : Number(process.exitCode);
   } catch (error) {

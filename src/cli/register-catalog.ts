@@ -1,23 +1,8 @@
 import type { Command } from 'commander';
-import { runCatalogAdd } from './commands/catalog-add.js';
-import { runCatalogExport } from './commands/catalog-export.js';
-import { ImportConflictError, runCatalogImport } from './commands/catalog-import.js';
 import { EXIT } from './cli-error.js';
-import { printConflicts } from './print/import-summary.js';
-import { runCatalogApproval, runCatalogHistory } from './commands/catalog-approval.js';
-import { runGroupDeclare, runGroupLeave, runGroupList, runGroupShow } from './commands/catalog-groups.js';
-import { runCatalogDiff } from './commands/catalog-diff.js';
-import { printDiff, printGroup, printGroupList, printHistory } from './print/catalog-team.js';
-import { isEmptyDiff } from '../parts/index.js';
-import { runCatalogInfo } from './commands/catalog-info.js';
-import { runCatalogList } from './commands/catalog-list.js';
-import { runCatalogShow } from './commands/catalog-show.js';
 import { jsonDocument, makeOutput } from './output.js';
-import { printPartDetail } from './print/part-detail.js';
-import { printPartList } from './print/part-list.js';
-import { printImportSummary } from './print/import-summary.js';
-import { encodePartCells } from '../catalog/index.js';
 
+// Each command loads its own modules when it runs, so start-up pays only for the one in use.
 type Opts = Record<string, string | boolean | undefined>;
 
 export function registerCatalogCommands(program: Command): void {
@@ -32,7 +17,9 @@ export function registerCatalogCommands(program: Command): void {
     .option('--overwrite-local', 'where a part changed both here and in the file, take the file\'s version')
     .option('--by <name>', 'who the change is recorded as (default: your OS user)')
     .option('--json', 'write the result as JSON')
-    .action((file: string, _o: Opts, cmd: Command) => {
+    .action(async (file: string, _o: Opts, cmd: Command) => {
+      const { ImportConflictError, runCatalogImport } = await import('./commands/catalog-import.js');
+      const { printConflicts, printImportSummary } = await import('./print/import-summary.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       try {
@@ -50,7 +37,8 @@ export function registerCatalogCommands(program: Command): void {
     .command('export [file]')
     .description('write the whole catalog in canonical order (stdout when no file is named)')
     .option('--format <format>', 'csv or json (default: from the file name, else csv)')
-    .action((file: string | undefined, _o: Opts, cmd: Command) => {
+    .action(async (file: string | undefined, _o: Opts, cmd: Command) => {
+      const { runCatalogExport } = await import('./commands/catalog-export.js');
       const o = cmd.optsWithGlobals();
       const result = runCatalogExport(file, o);
       if (file) process.stderr.write(`Wrote ${result.parts} parts to ${file}.\n`);
@@ -64,7 +52,9 @@ export function registerCatalogCommands(program: Command): void {
     .option('--approval <state>', 'preferred, approved, conditional, pending or banned')
     .option('--maker <name>', 'manufacturer name')
     .option('--json', 'write the parts as JSON')
-    .action((_o: Opts, cmd: Command) => {
+    .action(async (_o: Opts, cmd: Command) => {
+      const { runCatalogList } = await import('./commands/catalog-list.js');
+      const { printPartList } = await import('./print/part-list.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const { parts, catalogPath } = runCatalogList(o);
@@ -75,7 +65,10 @@ export function registerCatalogCommands(program: Command): void {
     .command('show <part>')
     .description('every rating of one part with its test conditions (PART or MAKER:PART)')
     .option('--json', 'write the part as JSON')
-    .action((reference: string, _o: Opts, cmd: Command) => {
+    .action(async (reference: string, _o: Opts, cmd: Command) => {
+      const { runCatalogShow } = await import('./commands/catalog-show.js');
+      const { printPartDetail } = await import('./print/part-detail.js');
+      const { encodePartCells } = await import('../catalog/index.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const part = runCatalogShow(reference, o);
@@ -87,7 +80,9 @@ export function registerCatalogCommands(program: Command): void {
     .description('add one part from column=value pairs, e.g. kind=schottky vrrm_v="40 V"')
     .option('--by <name>', 'who the change is recorded as (default: your OS user)')
     .option('--json', 'write the added part as JSON')
-    .action((args: string[], _o: Opts, cmd: Command) => {
+    .action(async (args: string[], _o: Opts, cmd: Command) => {
+      const { runCatalogAdd } = await import('./commands/catalog-add.js');
+      const { printPartDetail } = await import('./print/part-detail.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const { part, catalogPath } = runCatalogAdd(args, o);
@@ -98,7 +93,8 @@ export function registerCatalogCommands(program: Command): void {
     .command('info')
     .description('where the catalog is, its schema version and how many parts it holds')
     .option('--json', 'write the facts as JSON')
-    .action((_o: Opts, cmd: Command) => {
+    .action(async (_o: Opts, cmd: Command) => {
+      const { runCatalogInfo } = await import('./commands/catalog-info.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const info = runCatalogInfo(o);
@@ -112,7 +108,8 @@ export function registerCatalogCommands(program: Command): void {
     .option('--condition <text>', 'the condition of a conditional approval, e.g. "only below 60 °C ambient"')
     .option('--by <name>', 'who the change is recorded as (default: your OS user)')
     .option('--json', 'write the change as JSON')
-    .action((reference: string, state: string, _o: Opts, cmd: Command) => {
+    .action(async (reference: string, state: string, _o: Opts, cmd: Command) => {
+      const { runCatalogApproval } = await import('./commands/catalog-approval.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const { part, event } = runCatalogApproval(reference, state, o);
@@ -123,7 +120,9 @@ export function registerCatalogCommands(program: Command): void {
     .command('history <part>')
     .description('the approval trail of a part, oldest first (append-only)')
     .option('--json', 'write the trail as JSON')
-    .action((reference: string, _o: Opts, cmd: Command) => {
+    .action(async (reference: string, _o: Opts, cmd: Command) => {
+      const { runCatalogHistory } = await import('./commands/catalog-approval.js');
+      const { printHistory } = await import('./print/catalog-team.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const { part, events } = runCatalogHistory(reference, o);
@@ -134,7 +133,9 @@ export function registerCatalogCommands(program: Command): void {
     .command('groups')
     .description('second-source groups with how many fields differ between their members')
     .option('--json', 'write the groups as JSON')
-    .action((_o: Opts, cmd: Command) => {
+    .action(async (_o: Opts, cmd: Command) => {
+      const { runGroupList } = await import('./commands/catalog-groups.js');
+      const { printGroupList } = await import('./print/catalog-team.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       const groups = runGroupList(o);
@@ -145,7 +146,9 @@ export function registerCatalogCommands(program: Command): void {
     .command('group <name> [parts...]')
     .description('show a second-source group and what differs between its members; with parts, declare them interchangeable')
     .option('--json', 'write the group as JSON')
-    .action((groupName: string, parts: string[], _o: Opts, cmd: Command) => {
+    .action(async (groupName: string, parts: string[], _o: Opts, cmd: Command) => {
+      const { runGroupDeclare, runGroupShow } = await import('./commands/catalog-groups.js');
+      const { printGroup } = await import('./print/catalog-team.js');
       const o = cmd.optsWithGlobals();
       const out = makeOutput(Boolean(o.json));
       if (parts.length === 0) {
@@ -160,7 +163,8 @@ export function registerCatalogCommands(program: Command): void {
   catalog
     .command('ungroup <part>')
     .description('take a part out of its second-source group')
-    .action((reference: string, _o: Opts, cmd: Command) => {
+    .action(async (reference: string, _o: Opts, cmd: Command) => {
+      const { runGroupLeave } = await import('./commands/catalog-groups.js');
       const { part, dissolved } = runGroupLeave(reference, cmd.optsWithGlobals());
       process.stdout.write(`${part.partNumber} left its group.${dissolved ? ` Group ${dissolved} had one member left and was dissolved.` : ''}\n`);
     });
@@ -169,10 +173,35 @@ export function registerCatalogCommands(program: Command): void {
     .command('diff <before> <after>')
     .description('compare two exports (.csv/.json) or catalog files (.sqlite): added, removed, changed, approval moves; exit 1 if they differ')
     .option('--json', 'write the differences as JSON')
-    .action((before: string, after: string, _o: Opts, cmd: Command) => {
+    .action(async (before: string, after: string, _o: Opts, cmd: Command) => {
+      const { runCatalogDiff } = await import('./commands/catalog-diff.js');
+      const { printDiff } = await import('./print/catalog-team.js');
+      const { isEmptyDiff } = await import('../parts/index.js');
       const out = makeOutput(Boolean(cmd.optsWithGlobals().json));
       const outcome = runCatalogDiff(before, after);
       out.write(out.json ? jsonDocument('catalog diff', outcome) : printDiff(outcome));
       if (!isEmptyDiff(outcome.diff)) process.exitCode = EXIT.checkFailed;
+    });
+
+  catalog
+    .command('check')
+    .description('SQLite integrity check plus our own: every part valid, approval history consistent; exit 1 on a finding')
+    .option('--json', 'write the findings as JSON')
+    .action(async (_o: Opts, cmd: Command) => {
+      const { checkCatalog } = await import('../catalog/index.js');
+      const { withCatalog } = await import('./catalog-session.js');
+      const o = cmd.optsWithGlobals();
+      const out = makeOutput(Boolean(o.json));
+      const result = withCatalog(o, (c) => checkCatalog(c));
+      out.write(
+        out.json
+          ? jsonDocument('catalog check', result)
+          : [
+              `Catalog ${result.path}: schema ${result.schemaVersion}, ${result.parts} parts, ${result.historyEntries} history entries.`,
+              result.isHealthy ? 'No problems found.' : `${result.findings.length} problem${result.findings.length === 1 ? '' : 's'}:`,
+              ...result.findings.map((f) => `  [${f.check}] ${f.message}`),
+            ].join('\n'),
+      );
+      if (!result.isHealthy) process.exitCode = EXIT.checkFailed;
     });
 }

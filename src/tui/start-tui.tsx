@@ -1,8 +1,13 @@
+import { userInfo } from 'node:os';
 import { render } from 'ink';
-import { ensureDemoCatalog, listParts, openCatalog } from '../catalog/index.js';
-import type { Part } from '../parts/index.js';
+import { ensureDemoCatalog } from '../catalog/demo-catalog.js';
+import { openCatalog, type Catalog } from '../catalog/open-catalog.js';
 import { App } from './app.js';
 import { ThemeContext } from './hooks/use-theme.js';
+import { catalogService } from './io/catalog-service.js';
+import { designService } from './io/design-service.js';
+import { substringSearch, type PartSearch } from './hooks/use-part-search.js';
+import type { PartPager, TuiServices } from './services.js';
 import { themeFor } from './theme.js';
 
 export interface StartOptions {
@@ -11,23 +16,54 @@ export interface StartOptions {
   readonly hasCatalog: boolean;
 }
 
-function readParts(path: string): readonly Part[] {
-  const catalog = openCatalog(path, { create: false });
+function currentUser(): string {
   try {
-    return listParts(catalog);
-  } finally {
-    catalog.close();
+    return userInfo().username || 'unknown';
+  } catch {
+    return process.env.USER ?? 'unknown';
   }
 }
 
+/**
+ * Opens the catalog (nothing else is read at start: the parts are paged in as screens need
+ * them) and runs the interface until the user quits.
+ */
 export async function startTui({ catalogPath, isDemo, hasCatalog }: StartOptions): Promise<void> {
-  const label = isDemo ? 'demo' : catalogPath;
-  const loadDemo = () => ({ parts: readParts(ensureDemoCatalog()), label: 'demo' });
+  const user = currentUser();
+  const opened: Catalog[] = [];
+  const open = (path: string) => {
+    const catalog = openCatalog(path, { create: false });
+    opened.push(catalog);
+    return catalog;
+  };
+  // The catalog search and its query language load after the first frame; until then (a moment)
+  // lists are searched by plain substrings.
+  let loaded: typeof import('./io/query-search.js') | undefined;
+  const search: PartSearch = (parts, query) => (loaded?.querySearch ?? substringSearch)(parts, query);
+  const options = { user, search, searchPager: (catalog: Catalog, browse: PartPager) => loaded?.searchPager(catalog, browse) };
+  const services: TuiServices = {
+    catalog: hasCatalog ? catalogService(open(catalogPath), isDemo ? 'demo' : catalogPath, options) : null,
+    openDemo: () => catalogService(open(ensureDemoCatalog()), 'demo', options),
+    designs: designService(),
+    user,
+    search,
+    queryProblems: (text) => loaded?.queryProblems(text) ?? [],
+  };
   const app = render(
     <ThemeContext.Provider value={themeFor()}>
-      <App parts={hasCatalog ? readParts(catalogPath) : null} catalogLabel={label} loadDemo={loadDemo} />
+      <App services={services} catalogPath={catalogPath} />
     </ThemeContext.Provider>,
     { exitOnCtrlC: false },
   );
-  await app.waitUntilExit();
+  setTimeout(() => {
+    import('./io/query-search.js').then(
+      (m) => (loaded = m),
+      () => undefined,
+    );
+  }, 0);
+  try {
+    await app.waitUntilExit();
+  } finally {
+    for (const catalog of opened) catalog.close();
+  }
 }

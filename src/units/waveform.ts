@@ -43,6 +43,10 @@ export function parseWaveform(text: string): WaveformResult {
   if (!Number.isFinite(riseS) || !Number.isFinite(decayS)) {
     return { ok: false, issue: notFiniteIssue(SUBJECT, input) };
   }
+  // A zero width, or a decay shorter than the front, describes no surge: scaling by it would divide by zero.
+  if (!(riseS > 0) || !(decayS > riseS)) {
+    return { ok: false, issue: notANumberIssue(SUBJECT, input, 'both times must be above zero and the decay longer than the rise, e.g. "8/20 µs"') };
+  }
   const value = { riseS, decayS };
   if (reading.unit.unitWritten) return { ok: true, value };
   return { ok: true, value, note: `no unit given; read as ${formatWaveform(value)}` };

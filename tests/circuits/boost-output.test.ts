@@ -1,25 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { SAFETY_CAUTION } from '../../src/circuits/caution.js';
-import { findPolicy, type DeratingPolicy } from '../../src/circuits/derating.js';
-import type { SolvedPosition, SolveResult } from '../../src/circuits/role.js';
+import { roleHarness } from './role-harness.js';
 import { boostOutputRole } from '../../src/circuits/roles/boost-output.js';
 import { expectRelClose } from '../physics/expect-close.js';
 
-function solve(input: Record<string, unknown>, policyId = 'commercial'): SolveResult {
-  const parsed = boostOutputRole.schema.safeParse(input);
-  if (!parsed.success) throw new Error(parsed.error.message);
-  return boostOutputRole.solve(parsed.data, findPolicy(policyId) as DeratingPolicy);
-}
-function solved(input: Record<string, unknown>, policyId?: string): SolvedPosition {
-  const result = solve(input, policyId);
-  if (!result.ok) throw new Error(result.infeasible.reason);
-  return result.position;
-}
-const issues = (input: Record<string, unknown>) => {
-  const r = boostOutputRole.schema.safeParse(input);
-  return r.success ? [] : r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
-};
+const { solve, solved, issues } = roleHarness(boostOutputRole);
 
 // Derived by hand from Erickson & Maksimović's boost CCM relations (M = 1/(1 − D), IL = Iout/(1 − D),
 // ΔIL = Vin·D/(L·fs)): Vin 9–16 V, Vout 24 V, Iout 1 A, 200 kHz, L = 22 µH.

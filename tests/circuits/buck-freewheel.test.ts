@@ -1,26 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { SAFETY_CAUTION } from '../../src/circuits/caution.js';
-import { findPolicy, type DeratingPolicy } from '../../src/circuits/derating.js';
-import type { SolvedPosition, SolveResult } from '../../src/circuits/role.js';
 import { buckFreewheelRole } from '../../src/circuits/roles/buck-freewheel.js';
+import { roleHarness } from './role-harness.js';
 import { expectRelClose } from '../physics/expect-close.js';
 
-function solve(input: Record<string, unknown>, policyId = 'commercial'): SolveResult {
-  const parsed = buckFreewheelRole.schema.safeParse(input);
-  if (!parsed.success) throw new Error(parsed.error.message);
-  return buckFreewheelRole.solve(parsed.data, findPolicy(policyId) as DeratingPolicy);
-}
-function solved(input: Record<string, unknown>, policyId?: string): SolvedPosition {
-  const result = solve(input, policyId);
-  if (!result.ok) throw new Error(result.infeasible.reason);
-  return result.position;
-}
-const step = (p: SolvedPosition, symbol: string) => p.steps.find((s) => s.symbol === symbol)?.value ?? Number.NaN;
-const issues = (input: Record<string, unknown>) => {
-  const r = buckFreewheelRole.schema.safeParse(input);
-  return r.success ? [] : r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
-};
+const { solve, solved, step, issues } = roleHarness(buckFreewheelRole);
 
 // diode-formulas §2 [derived from Erickson & Maksimović, buck CCM steady state]: Vin 9–16 V, Vout 5 V, Iout 2 A.
 const example = { vin_min: '9 V', vin_max: '16 V', vout: '5 V', iout: '2 A', frequency: '400 kHz' };

@@ -1,25 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { SAFETY_CAUTION } from '../../src/circuits/caution.js';
-import { findPolicy, type DeratingPolicy } from '../../src/circuits/derating.js';
-import type { SolvedPosition, SolveResult } from '../../src/circuits/role.js';
+import { roleHarness } from './role-harness.js';
 import { flybackOutputRole } from '../../src/circuits/roles/flyback-output.js';
 import { expectRelClose } from '../physics/expect-close.js';
 
-function solve(input: Record<string, unknown>, policyId = 'commercial'): SolveResult {
-  const parsed = flybackOutputRole.schema.safeParse(input);
-  if (!parsed.success) throw new Error(parsed.error.message);
-  return flybackOutputRole.solve(parsed.data, findPolicy(policyId) as DeratingPolicy);
-}
-function solved(input: Record<string, unknown>, policyId?: string): SolvedPosition {
-  const result = solve(input, policyId);
-  if (!result.ok) throw new Error(result.infeasible.reason);
-  return result.position;
-}
-const issues = (input: Record<string, unknown>) => {
-  const r = flybackOutputRole.schema.safeParse(input);
-  return r.success ? [] : r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
-};
+const { solve, solved, issues } = roleHarness(flybackOutputRole);
 
 // Offline flyback, derived by hand (Erickson & Maksimović flyback relations): 85–265 V AC rectified
 // gives at most 265·√2 ≈ 375 V DC (and about 100 V in the valley at low line); Ns/Np = 0.1; 12 V, 2 A; 65 kHz.

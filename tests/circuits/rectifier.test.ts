@@ -1,26 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { SAFETY_CAUTION } from '../../src/circuits/caution.js';
-import { findPolicy, type DeratingPolicy } from '../../src/circuits/derating.js';
-import type { SolvedPosition, SolveResult } from '../../src/circuits/role.js';
 import { rectifierRole } from '../../src/circuits/roles/rectifier.js';
+import { roleHarness } from './role-harness.js';
 import { expectRelClose } from '../physics/expect-close.js';
 
-function solve(input: Record<string, unknown>, policyId = 'commercial'): SolveResult {
-  const parsed = rectifierRole.schema.safeParse(input);
-  if (!parsed.success) throw new Error(parsed.error.message);
-  return rectifierRole.solve(parsed.data, findPolicy(policyId) as DeratingPolicy);
-}
-function solved(input: Record<string, unknown>, policyId?: string): SolvedPosition {
-  const result = solve(input, policyId);
-  if (!result.ok) throw new Error(result.infeasible.reason);
-  return result.position;
-}
-const step = (p: SolvedPosition, symbol: string) => p.steps.find((s) => s.symbol === symbol)?.value ?? Number.NaN;
-const issues = (input: Record<string, unknown>) => {
-  const r = rectifierRole.schema.safeParse(input);
-  return r.success ? [] : r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
-};
+const { solve, solved, step, issues } = roleHarness(rectifierRole);
 
 // Sedra & Smith, peak-rectifier example (5th ed. Example 3.9, number from memory): half-wave,
 // Vp = 100 V, 60 Hz, R = 10 kΩ (IL = 10 mA), Vr = 2 V. Driven with VD = 0 and no tolerance so Vp = 100 V.

@@ -2,29 +2,11 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import { describe, expect, it } from 'vitest';
-import { PART_COLUMNS } from '../../src/parts/index.js';
+import { syntheticCsv } from '../helpers/synthetic-csv.js';
 import { runCliAsync } from '../helpers/run-cli.js';
 import { useTempDir } from '../helpers/temp-dir.js';
 
 const tempDir = useTempDir();
-
-function bigCsv(rows: number): string {
-  const lines = [PART_COLUMNS.join(',')];
-  for (let i = 0; i < rows; i++) {
-    const cells: Record<string, string> = {
-      manufacturer: 'Loadtest Devices',
-      part_number: `LT-${String(i).padStart(6, '0')}`,
-      kind: 'rectifier',
-      package: 'DO-41',
-      vrrm_v: String(100 + (i % 10) * 100),
-      if_av_a: '1',
-      tj_max_k: '423.15',
-      vf_points: '1.1@1@298.15',
-    };
-    lines.push(PART_COLUMNS.map((c) => cells[c] ?? '').join(','));
-  }
-  return lines.join('\n') + '\n';
-}
 
 describe('two processes writing one catalog', () => {
   it('an import and repeated adds from another process all succeed, and no trail entry is lost', async () => {
@@ -32,7 +14,7 @@ describe('two processes writing one catalog', () => {
     const env = { HEADROOM_CATALOG: join(dir, 'shared.sqlite') };
     const file = join(dir, 'big.csv');
     const rows = 20_000;
-    writeFileSync(file, bigCsv(rows));
+    writeFileSync(file, syntheticCsv(rows));
     const importing = runCliAsync(['catalog', 'import', file], env);
     let isImportDone = false;
     void importing.then(() => (isImportDone = true));

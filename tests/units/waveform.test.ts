@@ -60,3 +60,11 @@ describe('formatWaveform', () => {
     expect(parsed.ok && formatWaveform(parsed.value)).toBe(text);
   });
 });
+
+describe('waveforms that describe no surge', () => {
+  it.each(['0/20 µs', '8/0 µs', '20/8 µs', '8/8 µs'])('refuses %s', (text) => {
+    const r = parseWaveform(text);
+    expect(r.ok).toBe(false);
+    expect(!r.ok && r.issue.message).toContain('both times must be above zero and the decay longer than the rise');
+  });
+});

@@ -14,6 +14,9 @@ const FASTEST_PN_TRR_S = 4e-9;
 /** trr at most a twentieth of the period keeps recovery a small part of each cycle [common practice]. */
 const TRR_PERIOD_FRACTION = 20;
 
+/** Above this reverse voltage no small-signal part is made: look among fast rectifiers instead. */
+const HIGH_VOLTAGE_SIGNAL_V = 150;
+
 export function solveSignalClamp(c: SignalClampConditions, policy: DeratingPolicy): SolveResult {
   const d = new Derivation();
   const cautions: Caution[] = [];
@@ -82,7 +85,10 @@ export function solveSignalClamp(c: SignalClampConditions, policy: DeratingPolic
     ...(cjBound === undefined ? {} : { cjMaxF: cjBound }),
     ...(trrBound === undefined ? {} : { trrMaxS: trrBound }),
   };
-  const suitableKinds = trrBound !== undefined && trrBound < FASTEST_PN_TRR_S ? ['schottky', 'signal'] : ['signal', 'schottky'];
+  // Small-signal and Schottky parts stop near 100–200 V; above that, clamp and snubber diodes
+  // (an RCD clamp on a flyback primary, say) are fast rectifiers.
+  const lowVoltage = trrBound !== undefined && trrBound < FASTEST_PN_TRR_S ? ['schottky', 'signal'] : ['signal', 'schottky'];
+  const suitableKinds = vr > HIGH_VOLTAGE_SIGNAL_V ? ['fast-recovery', 'ultrafast', 'rectifier'] : lowVoltage;
   return {
     ok: true,
     position: { role: 'signal-clamp', policyId: policy.id, operatingPoint, limits, steps: d.steps, cautions, figures, suitableKinds },

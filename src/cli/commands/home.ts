@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
-import { countParts, openCatalog } from '../../catalog/index.js';
+import { openCatalog } from '../../catalog/open-catalog.js';
+import { countParts } from '../../catalog/part-repository.js';
 import { catalogPathFor, type CatalogOptions } from '../catalog-session.js';
 
 /**

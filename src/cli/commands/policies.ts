@@ -1,7 +1,8 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { parse as parseYaml } from 'yaml';
 import { BUILT_IN_POLICIES, type DeratingPolicy } from '../../circuits/derating.js';
-import { listTeamPolicies, openCatalog, saveTeamPolicy } from '../../catalog/index.js';
+import { openCatalog } from '../../catalog/open-catalog.js';
+import { listTeamPolicies, saveTeamPolicy } from '../../catalog/policy-repository.js';
 import { UsageError } from '../cli-error.js';
 import { catalogPathFor, withCatalog, type CatalogOptions } from '../catalog-session.js';
 import { changeAuthor } from '../user-name.js';

@@ -1,17 +1,24 @@
 import { useMemo } from 'react';
 import type { Part } from '../../parts/index.js';
 
-/** How the browser narrows the list; injected so tests and the later fuzzy search can replace it. */
+/** How a list of parts is narrowed by typed text; injected so tests and the fuzzy search can replace it. */
 export type PartSearch = (parts: readonly Part[], query: string) => readonly Part[];
 
-const squash = (s: string) => s.toLowerCase().replace(/[^a-z0-9µ]/g, '');
+/** Lower case without separators: "SOD-123" and "sod123" look the same. */
+export const squash = (s: string) => s.toLowerCase().replace(/[^a-z0-9µ]/g, '');
 
-/** Every word of the query must appear in the part's text, separators ignored ("sod123" finds SOD-123). */
+/** The text a part is found by, one squashed field after another. */
+export const searchText = (p: Pick<Part, 'partNumber' | 'manufacturer' | 'description' | 'package' | 'kind'>) =>
+  [p.partNumber, p.manufacturer, p.description, p.package, p.kind].map(squash).join('\u0001');
+
+export const queryWords = (query: string) => query.split(/\s+/).map(squash).filter(Boolean);
+
+/** Every word of the query must appear in one of the part's fields, separators ignored ("sod123" finds SOD-123). */
 export const substringSearch: PartSearch = (parts, query) => {
-  const words = query.split(/\s+/).map(squash).filter(Boolean);
+  const words = queryWords(query);
   if (words.length === 0) return parts;
   return parts.filter((p) => {
-    const hay = squash(`${p.partNumber} ${p.manufacturer} ${p.description} ${p.package} ${p.kind}`);
+    const hay = searchText(p);
     return words.every((w) => hay.includes(w));
   });
 };

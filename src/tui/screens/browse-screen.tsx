@@ -1,98 +1,107 @@
-import { Box, Text, useInput } from 'ink';
-import { useReducer } from 'react';
-import { describePart, safeText, type Part } from '../../parts/index.js';
-import { WindowedList } from '../components/windowed-list.js';
+import { Text } from 'ink';
+import { useDeferredValue, useMemo } from 'react';
+import { safeText } from '../../parts/index.js';
 import { PartRow, PartRowHeader } from '../components/part-row.js';
-import { usePartSearch, type PartSearch } from '../hooks/use-part-search.js';
+import { ScreenFrame, frameRows } from '../components/screen-frame.js';
+import { WindowedList, windowStart } from '../components/windowed-list.js';
+import { useKeys } from '../hooks/use-keys.js';
+import { useNavigator } from '../hooks/use-navigator.js';
+import { useServices } from '../hooks/use-services.js';
+import { useSyncReducer } from '../hooks/use-sync-state.js';
 import { useTheme } from '../hooks/use-theme.js';
-import { commandFor, helpLine } from '../keys.js';
+import { typedText, type ScreenCommand } from '../keys.js';
 import { browseReducer, initialBrowseState } from '../state/browse-state.js';
+import { truncate } from '../text/fit.js';
+import type { ScreenProps } from './screen-props.js';
 
-export interface BrowseScreenProps {
-  readonly parts: readonly Part[];
-  readonly catalogLabel: string;
-  readonly width: number;
-  readonly height: number;
-  readonly onQuit: () => void;
-  /** @default substringSearch */
-  readonly search?: PartSearch;
-}
+const COMMANDS: readonly ScreenCommand[] = [
+  ['select', 'open: ratings, approval trail'],
+  ['search', 'search: as you type; Enter or Esc ends typing'],
+  'addPart',
+  ['down', 'next part'],
+  ['up', 'previous part'],
+  'pageDown',
+  'pageUp',
+  'home',
+  'end',
+  ['back', 'back: clears the search first'],
+];
 
-/** Browse and search the catalog; Enter shows every rating of the selected part. */
-export function BrowseScreen({ parts, catalogLabel, width, height, onQuit, search }: BrowseScreenProps) {
+/**
+ * Browse and search the whole catalog. Only the visible page is read: large catalogs page
+ * through SQLite (services' pager), so 100 k parts never enter the interface's state.
+ */
+export function BrowseScreen({ width, height, isActive }: ScreenProps) {
   const theme = useTheme();
-  const [state, dispatch] = useReducer(browseReducer, initialBrowseState);
-  const found = usePartSearch(parts, state.query, search);
-  const page = Math.max(1, height - 7);
+  const nav = useNavigator();
+  const { catalog, queryProblems } = useServices();
+  const [state, dispatch, getState] = useSyncReducer(browseReducer, () => initialBrowseState);
+  const query = useDeferredValue(state.query);
+  const problems = useMemo(() => (query.trim() ? (queryProblems?.(query) ?? []) : []), [query, queryProblems]);
+  const body = height - frameRows(width);
+  const rows = Math.max(1, body - 4 - Math.min(1, problems.length));
+  const pager = catalog.pager();
+  const probe = useMemo(() => pager(query, state.cursor, 1), [pager, query, state.cursor]);
+  const total = probe.total;
+  const cursor = Math.min(state.cursor, Math.max(0, total - 1));
+  const start = windowStart(cursor, rows, total);
+  const page = useMemo(() => pager(query, start, rows), [pager, query, start, rows]);
+  const count = catalog.count();
 
-  useInput((input, key) => {
-    const command = commandFor(input, key);
-    if (command === 'quit') return onQuit();
-    if (command === 'up') return dispatch({ type: 'move', by: -1, count: found.length });
-    if (command === 'down') return dispatch({ type: 'move', by: 1, count: found.length });
-    if (command === 'pageUp') return dispatch({ type: 'move', by: -page, count: found.length });
-    if (command === 'pageDown') return dispatch({ type: 'move', by: page, count: found.length });
-    if (command === 'open') return dispatch({ type: 'open', count: found.length });
-    if (command === 'back') return dispatch({ type: 'back' });
-    if (key.backspace || key.delete) return dispatch({ type: 'erase' });
-    if (input && !key.ctrl && !key.meta) dispatch({ type: 'type', text: input });
+  useKeys({ isActive, isTyping: () => getState().isSearching, commands: COMMANDS }, (command, input, key) => {
+    const latest = getState();
+    const latestTotal = latest.query === query ? total : pager(latest.query, latest.cursor, 1).total;
+    const move = (by: number) => dispatch({ type: 'move', by, count: latestTotal });
+    if (command === 'down') move(1);
+    else if (command === 'up') move(-1);
+    else if (command === 'pageDown') move(rows);
+    else if (command === 'pageUp') move(-rows);
+    else if (command === 'home') move(-Infinity);
+    else if (command === 'end') move(Infinity);
+    else if (latest.isSearching) {
+      if (command === 'select' || command === 'back') dispatch({ type: 'endSearch' });
+      else if (command === 'erase') dispatch({ type: 'erase' });
+      else if (command === 'clearField') dispatch({ type: 'clearSearch' });
+      else if (command === undefined) dispatch({ type: 'type', text: typedText(input, key) });
+    } else if (command === 'search') dispatch({ type: 'startSearch' });
+    else if (command === 'addPart') nav.push({ name: 'add-part' });
+    else if (command === 'select') {
+      const part = pager(latest.query, Math.min(latest.cursor, latestTotal - 1), 1).parts[0];
+      if (part) nav.push({ name: 'part', part });
+    } else if (command === 'back') {
+      if (latest.query) dispatch({ type: 'clearSearch' });
+      else nav.back();
+    }
   });
 
-  const open = state.openIndex !== null ? found[state.openIndex] : undefined;
+  const searchText = state.isSearching || state.query ? `/${state.query}${state.isSearching ? '▏' : ''}` : '/ to search';
   return (
-    <Box flexDirection="column" width={width}>
-      <Text>
-        <Text bold color={theme.accent}>Headroom</Text>
-        <Text color={theme.muted}> · catalog {catalogLabel} · {parts.length} parts</Text>
+    <ScreenFrame title={`Catalog ${catalog.label}`} width={width} height={height} commands={COMMANDS}>
+      <Text wrap="truncate-end">
+        <Text bold={state.isSearching}>{searchText}</Text>
+        <Text color={theme.muted}>
+          {`  ${total.toLocaleString('en')}${probe.isTotalCapped ? '+' : ''} shown of ${count.toLocaleString('en')} parts`}
+        </Text>
       </Text>
-      {open ? (
-        <PartDetail part={open} />
+      {problems.length > 0 ? <Text color={theme.warn}>{truncate(`? ${problems.join('; ')} (docs/search.md)`, width)}</Text> : null}
+      {count === 0 ? (
+        <Text color={theme.warn}>{truncate('The catalog is empty. Press n to add a part, or import: headroom catalog import FILE.csv', width)}</Text>
+      ) : total === 0 ? (
+        <Text color={theme.warn}>{truncate(`Nothing matches "${safeText(state.query)}". Esc clears the search.`, width)}</Text>
       ) : (
         <>
-          <Text>
-            Search: {state.query}
-            <Text inverse> </Text>
-            <Text color={theme.muted}>  {found.length} shown</Text>
-          </Text>
-          {parts.length === 0 ? (
-            <Text color={theme.warn}>The catalog is empty. Import parts with `headroom catalog import FILE.csv`.</Text>
-          ) : found.length === 0 ? (
-            <Text color={theme.warn}>Nothing matches "{safeText(state.query)}". Esc clears the search.</Text>
-          ) : (
-            <>
-            <PartRowHeader width={width} />
-            <WindowedList
-              items={found}
-              cursor={state.cursor}
-              height={page}
-              keyOf={(p) => `${p.manufacturer}\u0000${p.partNumber}`}
-              renderItem={(p, isSelected) => <PartRow part={p} isSelected={isSelected} width={width} />}
-            />
-            </>
-          )}
+          <PartRowHeader width={width} />
+          <WindowedList
+            items={page.parts}
+            offset={start}
+            total={total}
+            cursor={cursor}
+            height={rows}
+            keyOf={(p) => `${p.manufacturer}\u0000${p.partNumber}`}
+            renderItem={(p, isSelected) => <PartRow part={p} isSelected={isSelected} width={width} />}
+          />
         </>
       )}
-      <Text color={theme.muted}>
-        {open ? helpLine(['back', 'quit']) : `type to search  ·  ${helpLine(['move', 'open', 'back', 'quit'])}`}
-      </Text>
-    </Box>
-  );
-}
-
-function PartDetail({ part }: { readonly part: Part }) {
-  const theme = useTheme();
-  const rows = describePart(part);
-  return (
-    <Box flexDirection="column" marginY={1}>
-      <Text bold>
-        {safeText(part.manufacturer)} {safeText(part.partNumber)}
-      </Text>
-      {rows.map((r, i) => (
-        <Text key={i}>
-          <Text color={r.section === 'ratings' ? theme.accent : theme.muted}>{r.label.padEnd(20)}</Text>
-          {safeText(r.value)}
-        </Text>
-      ))}
-    </Box>
+    </ScreenFrame>
   );
 }

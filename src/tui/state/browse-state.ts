@@ -1,34 +1,36 @@
 /** State of the catalog browser, changed only by this reducer so it can be tested without rendering. */
 export interface BrowseState {
   readonly query: string;
+  /** True while keys go into the search text. */
+  readonly isSearching: boolean;
   readonly cursor: number;
-  readonly openIndex: number | null;
 }
 
 export type BrowseAction =
+  | { type: 'startSearch' }
+  | { type: 'endSearch' }
   | { type: 'type'; text: string }
   | { type: 'erase' }
-  | { type: 'move'; by: number; count: number }
-  | { type: 'open'; count: number }
-  | { type: 'back' };
+  | { type: 'clearSearch' }
+  | { type: 'move'; by: number; count: number };
 
-export const initialBrowseState: BrowseState = { query: '', cursor: 0, openIndex: null };
+export const initialBrowseState: BrowseState = { query: '', isSearching: false, cursor: 0 };
 
 export function browseReducer(state: BrowseState, action: BrowseAction): BrowseState {
   switch (action.type) {
+    case 'startSearch':
+      return { ...state, isSearching: true };
+    case 'endSearch':
+      return { ...state, isSearching: false };
     case 'type':
-      return state.openIndex !== null ? state : { ...state, query: state.query + action.text, cursor: 0 };
+      return action.text ? { ...state, query: state.query + action.text, cursor: 0 } : state;
     case 'erase':
-      return state.openIndex !== null ? state : { ...state, query: state.query.slice(0, -1), cursor: 0 };
+      return { ...state, query: [...state.query].slice(0, -1).join(''), cursor: 0 };
+    case 'clearSearch':
+      return { ...state, query: '', isSearching: false, cursor: 0 };
     case 'move': {
-      if (state.openIndex !== null || action.count === 0) return state;
-      const cursor = Math.min(action.count - 1, Math.max(0, state.cursor + action.by));
-      return { ...state, cursor };
+      if (action.count <= 0) return { ...state, cursor: 0 };
+      return { ...state, cursor: Math.min(action.count - 1, Math.max(0, state.cursor + action.by)) };
     }
-    case 'open':
-      return action.count > 0 ? { ...state, openIndex: state.cursor } : state;
-    case 'back':
-      if (state.openIndex !== null) return { ...state, openIndex: null };
-      return { ...state, query: '', cursor: 0 };
   }
 }

@@ -1,0 +1,10 @@
+export * from './evaluation.js';
+export * from './evaluate-part.js';
+export * from './explain.js';
+export * from './judge.js';
+export * from './thermal-model.js';
+export * from './rank-candidates.js';
+export * from './score-candidate.js';
+export { buildLossModel, type LossModel, type LossModelResult } from './loss-model.js';
+export { partZenerWindow, type PartZenerWindow } from './check-zener.js';
+export { partClamp, type PartClamp } from './check-tvs.js';

@@ -1,0 +1,25 @@
+import type { LossModel } from './loss-model.js';
+
+/** Cells the range from ambient to Tj max is cut into, on top of the model's own breakpoints. */
+const CELLS = 48;
+
+/**
+ * True when the heat balance Tj = Ta + RθJA·P(Tj) provably has no solution up to Tj max: on every
+ * cell [t1, t2] the lowest possible Ta + RθJA·P stays above t2. Then the physics solver could only
+ * report a runaway too, so a ranking skips it; shown parts are still solved for the solver's words.
+ * False means "not proven", never "stable".
+ */
+export function provesRunaway(model: LossModel, ambientK: number, rthJaKPerW: number, tjMaxK: number): boolean {
+  if (!(tjMaxK > ambientK)) return true;
+  const step = (tjMaxK - ambientK) / CELLS;
+  const cuts = [ambientK, tjMaxK, ...model.breakpoints.filter((t) => t > ambientK && t < tjMaxK)];
+  for (let i = 1; i < CELLS; i++) cuts.push(ambientK + i * step);
+  cuts.sort((a, b) => a - b);
+  for (let i = 1; i < cuts.length; i++) {
+    const t1 = cuts[i - 1]!;
+    const t2 = cuts[i]!;
+    if (t2 - t1 < 1e-9) continue;
+    if (ambientK + rthJaKPerW * model.lowerBound(t1, t2) <= t2) return false;
+  }
+  return true;
+}

@@ -1,0 +1,44 @@
+import { useEffect, useMemo, useState } from 'react';
+import { safeText, type Part } from '../../parts/index.js';
+import { ScreenFrame, frameRows } from '../components/screen-frame.js';
+import { ScrollView, maxOffset } from '../components/scroll-view.js';
+import { useKeys } from '../hooks/use-keys.js';
+import { useNavigator } from '../hooks/use-navigator.js';
+import { useServices } from '../hooks/use-services.js';
+import type { ScreenCommand } from '../keys.js';
+import { partDoc } from '../views/part-doc.js';
+import type { ScreenProps } from './screen-props.js';
+
+export interface PartScreenProps extends ScreenProps {
+  readonly part: Part;
+}
+
+const COMMANDS: readonly ScreenCommand[] = ['approval', ['down', 'scroll down'], ['up', 'scroll up'], 'pageDown', 'pageUp', ['back', 'back: to the list']];
+
+/** A catalog part: every rating with its test condition, and its approval trail. */
+export function PartScreen({ part: given, width, height, isActive }: PartScreenProps) {
+  const nav = useNavigator();
+  const { catalog } = useServices();
+  const [part, setPart] = useState(given);
+  const [offset, setOffset] = useState(0);
+  // Back from an approval change: show the part and its trail as stored now.
+  useEffect(() => {
+    if (isActive) setPart((p) => catalog.find(p) ?? p);
+  }, [isActive, catalog]);
+  const history = useMemo(() => catalog.history(part), [catalog, part]);
+  const lines = useMemo(() => partDoc(part, history, Math.min(width, 120)), [part, history, width]);
+  const body = height - frameRows(width);
+  const last = maxOffset(lines.length, body);
+  const page = Math.max(1, body - 3);
+  useKeys({ isActive, commands: COMMANDS }, (command) => {
+    const by = command === 'down' ? 1 : command === 'up' ? -1 : command === 'pageDown' ? page : command === 'pageUp' ? -page : 0;
+    if (by !== 0) setOffset((o) => Math.min(last, Math.max(0, o + by)));
+    else if (command === 'approval') nav.push({ name: 'approval', part });
+    else if (command === 'back') nav.back();
+  });
+  return (
+    <ScreenFrame title={`Catalog › ${safeText(part.partNumber)}`} width={width} height={height} commands={COMMANDS}>
+      <ScrollView lines={lines} offset={offset} height={body} />
+    </ScreenFrame>
+  );
+}

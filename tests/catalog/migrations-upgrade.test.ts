@@ -1,0 +1,56 @@
+import { join } from 'node:path';
+import Database from 'better-sqlite3';
+import { describe, expect, it } from 'vitest';
+import { approvalHistory, checkCatalog, latestSchemaVersion, listParts, listTeamPolicies, loadMigrations, migrate, openCatalog } from '../../src/catalog/index.js';
+import { useTempDir } from '../helpers/temp-dir.js';
+
+const tempDir = useTempDir();
+const earlier = Array.from({ length: latestSchemaVersion() - 1 }, (_, i) => i + 1);
+
+/** A catalog as a program of schema version `v` would have written it, with data in every table it had. */
+function catalogAtVersion(path: string, v: number): void {
+  const db = new Database(path);
+  db.pragma('journal_mode = WAL');
+  migrate(db, loadMigrations(), v);
+  db.prepare(
+    `INSERT INTO part (manufacturer, part_number, kind, package, description, vrrm_v, if_av_a, tj_max_k, vf_points, ir_points, rth_ja_k_per_w, updated_at)
+     VALUES ('Oldtime Devices', 'OT-600', 'rectifier', 'DO-41', 'kept since v${v}', 600, 1, 423.15, '[{"vfV":1.1,"ifA":1,"tjK":298.15}]', '[{"irA":5e-6,"vrV":600,"tjK":298.15}]', 65, '2025-06-01')`,
+  ).run();
+  if (v >= 2) {
+    db.prepare("UPDATE part SET approval = 'conditional', approval_note = 'only below 60 °C', second_source_group = 'R1A-DO41'").run();
+    db.prepare("INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason) VALUES ('Oldtime Devices', 'OT-600', '2025-06-01', 'ce', NULL, 'conditional', 'only below 60 °C', 'first review')").run();
+  }
+  if (v >= 3) {
+    const policy = {
+      id: 'old-rules',
+      name: 'Old rules',
+      description: '',
+      factors: Object.fromEntries(['vrrm', 'ifAv', 'ifsm', 'pd', 'pppm'].map((k) => [k, { value: 0.7, source: 'house rule' }])),
+      tj: { marginBelowMaxK: 30, source: 'house rule' },
+    };
+    db.prepare("INSERT INTO derating_policy (id, body, updated_at, updated_by) VALUES ('old-rules', ?, '2025-06-01', 'ce')").run(JSON.stringify(policy));
+  }
+  db.close();
+}
+
+describe('upgrading a catalog of every earlier schema version', () => {
+  it.each(earlier)('from version %i keeps every part, trail entry and policy, and leaves a backup', (v) => {
+    const path = join(tempDir(), `v${v}.sqlite`);
+    catalogAtVersion(path, v);
+    const catalog = openCatalog(path);
+    expect(catalog.migrated).toEqual(loadMigrations().map((m) => m.version).filter((x) => x > v));
+    expect(catalog.backupPath).toBe(`${path}.before-v${latestSchemaVersion()}.bak`);
+    const [part] = listParts(catalog);
+    expect(part).toMatchObject({ partNumber: 'OT-600', description: `kept since v${v}`, vrrmV: 600, rthJaKPerW: 65, irPoints: [{ irA: 5e-6, vrV: 600, tjK: 298.15 }] });
+    if (v >= 2) {
+      expect(part).toMatchObject({ approval: 'conditional', approvalNote: 'only below 60 °C', secondSourceGroup: 'R1A-DO41' });
+      expect(approvalHistory(catalog, part!).map((e) => e.reason)).toEqual(['first review']);
+    }
+    if (v >= 3) expect(listTeamPolicies(catalog).map((p) => p.id)).toEqual(['old-rules']);
+    expect(checkCatalog(catalog).isHealthy).toBe(true);
+    catalog.close();
+    const backup = new Database(`${path}.before-v${latestSchemaVersion()}.bak`, { readonly: true });
+    expect(backup.pragma('user_version', { simple: true })).toBe(v);
+    backup.close();
+  });
+});
