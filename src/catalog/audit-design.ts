@@ -65,6 +65,8 @@ export function auditDesign(catalog: Catalog, design: Design, options: AuditOpti
   const bomByRef = new Map<string, BomLine>();
   for (const line of options.bom ?? []) for (const ref of line.refs) bomByRef.set(ref.toUpperCase(), line);
   const positions: PositionAudit[] = [];
+  // Boards repeat positions (every relay gets the same freewheel): search once per distinct position.
+  const suggestions = new Map<string, PositionAudit['suggestion']>();
   for (const position of design.positions) {
     const findings: string[] = [];
     const bom = bomByRef.get(position.ref.toUpperCase());
@@ -119,7 +121,13 @@ export function auditDesign(catalog: Catalog, design: Design, options: AuditOpti
       }
     }
     const tightest = (evaluation?.limits ?? []).filter((l) => l.headroom !== null && l.scoresMargin).sort((a, b) => a.headroom! - b.headroom!).slice(0, 3);
-    const suggestion = status === 'fail' && options.suggest !== false ? suggest(catalog, solvedPosition, solved.policy, part) : null;
+    let suggestion: PositionAudit['suggestion'] = null;
+    if (status === 'fail' && options.suggest !== false) {
+      const key = JSON.stringify([position.role, position.conditions, position.rthJa ?? null, solved.policy.id]);
+      if (!suggestions.has(key)) suggestions.set(key, suggest(catalog, solvedPosition, solved.policy, null));
+      const found = suggestions.get(key)!;
+      suggestion = found && found.part.partNumber !== part?.partNumber ? found : null;
+    }
     positions.push({ ...base, status, part, findings, evaluation, tightest, cautions: solvedPosition.cautions, suggestion });
   }
   // BOM lines for designators the design does not describe: nothing to check them against.

@@ -1,4 +1,4 @@
-import { LineCounter, isMap, isScalar, isSeq, parseDocument, type Node, type YAMLMap } from 'yaml';
+import { LineCounter, isAlias, isMap, isScalar, isSeq, parseDocument, type Node, type YAMLMap } from 'yaml';
 
 export const DESIGN_FORMAT_NAME = 'headroom-design';
 export const DESIGN_FORMAT_VERSION = 1;
@@ -88,7 +88,9 @@ export function readDesignText(file: string, text: string): DesignReadResult {
       else if (seen.has(ref.toUpperCase())) add(line, `${field}.ref`, `${ref} is listed twice (first at line ${seen.get(ref.toUpperCase())})`, 'each reference designator once');
       else seen.set(ref.toUpperCase(), line);
       if (typeof p.role !== 'string') add(line, `${field}.role`, 'required: the circuit role', 'a role from `headroom roles`, e.g. role: rectifier');
-      const conditionsNode = item.get('conditions', true);
+      // Shared conditions written once with a YAML anchor (&relay … *relay) read as their mapping.
+      const rawConditions = item.get('conditions', true);
+      const conditionsNode = isAlias(rawConditions) ? rawConditions.resolve(doc) : rawConditions;
       if (conditionsNode !== undefined && !isMap(conditionsNode)) add(lineOf(conditionsNode), `${field}.conditions`, 'must be a mapping of condition names to values', 'e.g. conditions: {vin_max: 16 V}');
       for (const key of ['policy', 'part', 'notes'] as const) {
         if (p[key] !== undefined && typeof p[key] !== 'string') add(lineOf(item.get(key, true)), `${field}.${key}`, 'must be text', '');

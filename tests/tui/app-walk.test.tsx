@@ -92,7 +92,7 @@ describe('a whole session at the keyboard', () => {
     const saved = readFileSync(file, 'utf8');
     expect(saved).toBe(RELAY_BOARD.replace('    notes: Freewheel for K1.\n', '    notes: Freewheel for K1.\n    part: Testwell Devices:GOOD-1\n'));
     await press(stdin, KEY.enter);
-    await waitFor(lastFrame, '✓ Testwell Devices:GOOD-1');
+    await waitFor(lastFrame, 'part Testwell Devices:GOOD-1');
   });
 
   it('follows keys sent in one burst across changes of screen', async () => {

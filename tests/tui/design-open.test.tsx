@@ -38,7 +38,7 @@ describe('opening a design file', () => {
     expect(lastFrame()).toContain('relay-board.yaml▏');
     await press(stdin, KEY.enter);
     expect(lastFrame()).toContain('Relay board · 2 positions');
-    expect(lastFrame()).toMatch(/› K1-D\s+coil-freewheel\s+✓ Testwell Devices:GOOD-1/);
+    expect(lastFrame()).toMatch(/› K1-D\s+coil-freewheel\s+part Testwell Devices:GOOD-1/);
     await press(stdin, KEY.enter);
     const route = routes[0] as { name: string; draft: { values: Record<string, string>; origin: { ref: string } } };
     expect(route.name).toBe('form');

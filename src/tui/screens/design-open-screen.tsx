@@ -110,7 +110,7 @@ export function DesignOpenScreen({ width, height, isActive }: ScreenProps) {
               <Text inverse={isSelected} wrap="truncate-end">
                 {fit(`${isSelected ? '›' : ' '} ${p.ref}`, 7)}
                 {fit(p.role, 17)}
-                <Text color={isSelected ? undefined : p.part ? theme.good : theme.muted}>{fit(p.part ? `✓ ${safeText(p.part)}` : '· no part yet', isWide ? 40 : width - 26)}</Text>
+                <Text color={isSelected ? undefined : p.part ? undefined : theme.muted}>{fit(p.part ? `part ${safeText(p.part)}` : 'no part yet', isWide ? 40 : width - 26)}</Text>
                 {isWide ? <Text color={isSelected ? undefined : theme.muted}>{truncate(safeText(p.notes ?? ''), width - 66)}</Text> : null}
               </Text>
             )}
