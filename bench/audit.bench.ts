@@ -55,7 +55,7 @@ for (const size of words.length > 0 ? words : ['10k', '100k', '1m']) {
     const part = planted ? `${row.manufacturer}:${row.part_number}` : best[k]!;
     return { ref: `D${i + 1}`, role: shapes[k]!.role, ...(shapes[k]!.policy ? { policy: shapes[k]!.policy } : {}), part, conditions: shapes[k]!.conditions };
   });
-  const text = stringify({ format: 'headroom-design', version: 1, name: `Benchmark board, ${count} positions`, positions });
+  const text = stringify({ format: 'headroom-design', version: 1, name: `Benchmark board, ${count} positions`, positions }, { aliasDuplicateObjects: false });
   const designFile = join(outDirectory(), `audit-design-${count}.yaml`);
   writeFileSync(designFile, text);
   const read = readDesignText(designFile, text);

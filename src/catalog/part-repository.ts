@@ -1,4 +1,5 @@
 import { PART_KINDS, type ApprovalState, type Part, type PartKind } from '../parts/index.js';
+import type BetterSqlite3 from 'better-sqlite3';
 import { CatalogError } from './catalog-error.js';
 import type { Catalog } from './open-catalog.js';
 import { ROW_COLUMNS, comparePartIdentity, partToRow, rowToPart, type PartRow } from './part-rows.js';
@@ -105,14 +106,28 @@ export function countParts(catalog: Catalog): number {
  * Finds one part from what a person types: "PART-NUMBER" or "Manufacturer:PART-NUMBER",
  * letter case ignored. Unknown or ambiguous references are errors that say what to type.
  */
+// Prepared once per connection: an audit looks up hundreds of parts.
+const LOOKUPS = new WeakMap<BetterSqlite3.Database, { byIdentity: BetterSqlite3.Statement; byNumber: BetterSqlite3.Statement }>();
+
+function lookupStatements(db: BetterSqlite3.Database) {
+  let found = LOOKUPS.get(db);
+  if (!found) {
+    found = {
+      byIdentity: db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE`),
+      byNumber: db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE part_number = ? COLLATE NOCASE`),
+    };
+    LOOKUPS.set(db, found);
+  }
+  return found;
+}
+
 export function findPart(catalog: Catalog, reference: string): Part {
   const text = reference.trim();
   const colon = text.indexOf(':');
+  const statements = lookupStatements(catalog.db);
   const rows = (colon > 0
-    ? catalog.db
-        .prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE`)
-        .all(text.slice(0, colon).trim(), text.slice(colon + 1).trim())
-    : catalog.db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE part_number = ? COLLATE NOCASE`).all(text)) as PartRow[];
+    ? statements.byIdentity.all(text.slice(0, colon).trim(), text.slice(colon + 1).trim())
+    : statements.byNumber.all(text)) as PartRow[];
   if (rows.length === 0) {
     throw new CatalogError('unknown-part', `no part "${text}" in ${catalog.path}`, 'list parts with `headroom catalog list`');
   }

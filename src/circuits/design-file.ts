@@ -1,4 +1,4 @@
-import { LineCounter, isAlias, isMap, isScalar, isSeq, parseDocument, type Node, type YAMLMap } from 'yaml';
+import { LineCounter, isAlias, isMap, isScalar, isSeq, parseDocument, visit, type Node, type YAMLMap } from 'yaml';
 
 export const DESIGN_FORMAT_NAME = 'headroom-design';
 export const DESIGN_FORMAT_VERSION = 1;
@@ -50,6 +50,16 @@ export function readDesignText(file: string, text: string): DesignReadResult {
     return range ? lineCounter.linePos(range[0]).line : 0;
   };
   const issues: DesignIssue[] = [];
+  // Anchors found in one pass, on first use: resolving each alias alone would walk the file each time.
+  let anchors: Map<string, Node> | undefined;
+  const anchored = () => {
+    if (!anchors) {
+      const found = new Map<string, Node>();
+      visit(doc, { Node: (_key, node) => void (node.anchor && found.set(node.anchor, node)) });
+      anchors = found;
+    }
+    return anchors;
+  };
   const add = (line: number, field: string, message: string, expected = '') => issues.push({ file, line, field, message, expected });
   if (doc.errors.length > 0) {
     for (const e of doc.errors) add(Math.max(1, e.linePos?.[0]?.line ?? lineCounter.linePos(e.pos[0]).line), '', `not readable as YAML: ${e.message.split('\n')[0]}`, FORM);
@@ -90,7 +100,7 @@ export function readDesignText(file: string, text: string): DesignReadResult {
       if (typeof p.role !== 'string') add(line, `${field}.role`, 'required: the circuit role', 'a role from `headroom roles`, e.g. role: rectifier');
       // Shared conditions written once with a YAML anchor (&relay … *relay) read as their mapping.
       const rawConditions = item.get('conditions', true);
-      const conditionsNode = isAlias(rawConditions) ? rawConditions.resolve(doc) : rawConditions;
+      const conditionsNode = isAlias(rawConditions) ? anchored().get(rawConditions.source) : rawConditions;
       if (conditionsNode !== undefined && !isMap(conditionsNode)) add(lineOf(conditionsNode), `${field}.conditions`, 'must be a mapping of condition names to values', 'e.g. conditions: {vin_max: 16 V}');
       for (const key of ['policy', 'part', 'notes'] as const) {
         if (p[key] !== undefined && typeof p[key] !== 'string') add(lineOf(item.get(key, true)), `${field}.${key}`, 'must be text', '');
