@@ -17,6 +17,8 @@ import type { ScreenProps } from './screen-props.js';
 const COMMANDS: readonly ScreenCommand[] = [
   ['select', 'open: ratings, approval trail'],
   ['search', 'search: as you type; Enter or Esc ends typing'],
+  'erase',
+  'clearField',
   'addPart',
   ['down', 'next part'],
   ['up', 'previous part'],

@@ -27,6 +27,8 @@ const COMMANDS: readonly ScreenCommand[] = [
   ['select', 'open: every margin, losses, charts'],
   'assign',
   ['search', 'search: as you type; Enter or Esc ends typing'],
+  'erase',
+  'clearField',
   'sort',
   'filter',
   ['down', 'next part'],
