@@ -1,36 +1,11 @@
-/** State of the catalog browser, changed only by this reducer so it can be tested without rendering. */
-export interface BrowseState {
-  readonly query: string;
-  /** True while keys go into the search text. */
-  readonly isSearching: boolean;
-  readonly cursor: number;
-}
+import { searchListReducer, type SearchListAction, type SearchListState } from './search-list.js';
 
-export type BrowseAction =
-  | { type: 'startSearch' }
-  | { type: 'endSearch' }
-  | { type: 'type'; text: string }
-  | { type: 'erase' }
-  | { type: 'clearSearch' }
-  | { type: 'move'; by: number; count: number };
+/** State of the catalog browser, changed only by this reducer so it can be tested without rendering. */
+export type BrowseState = SearchListState;
+export type BrowseAction = SearchListAction;
 
 export const initialBrowseState: BrowseState = { query: '', isSearching: false, cursor: 0 };
 
 export function browseReducer(state: BrowseState, action: BrowseAction): BrowseState {
-  switch (action.type) {
-    case 'startSearch':
-      return { ...state, isSearching: true };
-    case 'endSearch':
-      return { ...state, isSearching: false };
-    case 'type':
-      return action.text ? { ...state, query: state.query + action.text, cursor: 0 } : state;
-    case 'erase':
-      return { ...state, query: [...state.query].slice(0, -1).join(''), cursor: 0 };
-    case 'clearSearch':
-      return { ...state, query: '', isSearching: false, cursor: 0 };
-    case 'move': {
-      if (action.count <= 0) return { ...state, cursor: 0 };
-      return { ...state, cursor: Math.min(action.count - 1, Math.max(0, state.cursor + action.by)) };
-    }
-  }
+  return searchListReducer(state, action);
 }

@@ -1,4 +1,5 @@
 import type { Part } from '../../parts/index.js';
+import { searchListReducer, type SearchListAction, type SearchListState } from './search-list.js';
 import type { RankedCandidate } from '../../selection/index.js';
 
 export const CANDIDATE_SORTS = ['score', 'price', 'margin'] as const;
@@ -14,24 +15,12 @@ export const FILTER_LABELS: Record<CandidateFilter, string> = {
 };
 
 /** The candidate list's own state: search text, sort, filter and cursor. */
-export interface CandidateListState {
-  readonly query: string;
-  /** True while keys go into the search text. */
-  readonly isSearching: boolean;
+export interface CandidateListState extends SearchListState {
   readonly sort: CandidateSort;
   readonly filter: CandidateFilter;
-  readonly cursor: number;
 }
 
-export type CandidateListAction =
-  | { type: 'startSearch' }
-  | { type: 'endSearch' }
-  | { type: 'type'; text: string }
-  | { type: 'erase' }
-  | { type: 'clearSearch' }
-  | { type: 'cycleSort' }
-  | { type: 'cycleFilter' }
-  | { type: 'move'; by: number; count: number };
+export type CandidateListAction = SearchListAction | { type: 'cycleSort' } | { type: 'cycleFilter' };
 
 export const initialCandidateList: CandidateListState = { query: '', isSearching: false, sort: 'score', filter: 'all', cursor: 0 };
 
@@ -39,22 +28,12 @@ const next = <T>(list: readonly T[], current: T): T => list[(list.indexOf(curren
 
 export function candidateListReducer(state: CandidateListState, action: CandidateListAction): CandidateListState {
   switch (action.type) {
-    case 'startSearch':
-      return { ...state, isSearching: true };
-    case 'endSearch':
-      return { ...state, isSearching: false };
-    case 'type':
-      return { ...state, query: state.query + action.text, cursor: 0 };
-    case 'erase':
-      return { ...state, query: [...state.query].slice(0, -1).join(''), cursor: 0 };
-    case 'clearSearch':
-      return { ...state, query: '', isSearching: false, cursor: 0 };
     case 'cycleSort':
       return { ...state, sort: next(CANDIDATE_SORTS, state.sort), cursor: 0 };
     case 'cycleFilter':
       return { ...state, filter: next(CANDIDATE_FILTERS, state.filter), cursor: 0 };
-    case 'move':
-      return action.count <= 0 ? state : { ...state, cursor: Math.min(action.count - 1, Math.max(0, state.cursor + action.by)) };
+    default:
+      return searchListReducer(state, action);
   }
 }
 
