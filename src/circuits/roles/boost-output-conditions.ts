@@ -2,16 +2,12 @@ import { z } from 'zod';
 import { quantitySchema } from '../../units/index.js';
 import { q } from '../derivation.js';
 import type { RoleInput } from '../role.js';
-import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
+import { AMBIENT_INPUTS, ambientShape } from './common-limits.js';
+import { checkConverterRanges, checkVoutMax, converterShape } from './converter-conditions.js';
 
 export const boostOutputSchema = z
   .object({
-    vin_min: requiredQuantity('voltage', { positive: true }),
-    vin_max: requiredQuantity('voltage', { positive: true }),
-    vout: requiredQuantity('voltage', { positive: true }),
-    vout_max: quantitySchema('voltage', { positive: true }).optional(),
-    iout: requiredQuantity('current', { positive: true }),
-    frequency: requiredQuantity('frequency', { positive: true }),
+    ...converterShape,
     inductance: quantitySchema('inductance', { positive: true }).optional(),
     ripple_fraction: quantitySchema('ratio', { min: 0.01, max: 1.5 }).default(0.3),
     ringing_allowance: quantitySchema('ratio', { min: 0, max: 2 }).default(0.2),
@@ -21,14 +17,11 @@ export const boostOutputSchema = z
   })
   .strict()
   .superRefine((c, ctx) => {
-    checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage');
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
+    checkConverterRanges(ctx, c);
     if (c.vin_max > c.vout) {
       ctx.addIssue({ code: 'custom', path: ['vin_max'], message: `vin_max ${q(c.vin_max, 'voltage')} is above vout ${q(c.vout, 'voltage')}: a boost converter cannot regulate below its input` });
     }
-    if (c.vout_max !== undefined && c.vout_max < c.vout) {
-      ctx.addIssue({ code: 'custom', path: ['vout_max'], message: `vout_max ${q(c.vout_max, 'voltage')} is below vout ${q(c.vout, 'voltage')}` });
-    }
+    checkVoutMax(ctx, c);
     if (c.output_capacitance !== undefined && c.inductance === undefined && c.source_resistance === undefined) {
       ctx.addIssue({ code: 'custom', path: ['output_capacitance'], message: 'output_capacitance needs inductance or source_resistance to bound the start-up inrush' });
     }

@@ -1,8 +1,8 @@
 import { z } from 'zod';
 import { quantitySchema } from '../../units/index.js';
-import { q } from '../derivation.js';
 import type { RoleInput } from '../role.js';
-import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
+import { AMBIENT_INPUTS, ambientShape } from './common-limits.js';
+import { checkConverterRanges, checkVoutMax, converterShape } from './converter-conditions.js';
 
 export const FLYBACK_MODES = ['ccm', 'dcm'] as const;
 
@@ -11,12 +11,7 @@ const turns = (what: string) =>
 
 export const flybackOutputSchema = z
   .object({
-    vin_min: requiredQuantity('voltage', { positive: true }),
-    vin_max: requiredQuantity('voltage', { positive: true }),
-    vout: requiredQuantity('voltage', { positive: true }),
-    vout_max: quantitySchema('voltage', { positive: true }).optional(),
-    iout: requiredQuantity('current', { positive: true }),
-    frequency: requiredQuantity('frequency', { positive: true }),
+    ...converterShape,
     turns_ratio_ns_np: turns('the turns ratio Ns/Np'),
     ns: turns('the secondary turns ns'),
     np: turns('the primary turns np'),
@@ -29,11 +24,8 @@ export const flybackOutputSchema = z
   })
   .strict()
   .superRefine((c, ctx) => {
-    checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage');
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-    if (c.vout_max !== undefined && c.vout_max < c.vout) {
-      ctx.addIssue({ code: 'custom', path: ['vout_max'], message: `vout_max ${q(c.vout_max, 'voltage')} is below vout ${q(c.vout, 'voltage')}` });
-    }
+    checkConverterRanges(ctx, c);
+    checkVoutMax(ctx, c);
     const hasPair = c.ns !== undefined || c.np !== undefined;
     if (c.turns_ratio_ns_np === undefined && !hasPair) {
       ctx.addIssue({ code: 'custom', path: ['turns_ratio_ns_np'], message: 'required condition is missing: give turns_ratio_ns_np (e.g. 0.25), or ns and np' });
