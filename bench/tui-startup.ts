@@ -4,7 +4,8 @@
  *   npm run build && node dist/bench/tui-startup.js [100k] [--runs 7]
  * The catalog is bench/out/tui-catalog-SIZE.sqlite, built once with the synthetic generator
  * (bench/synthetic-parts.ts, seed 42); bench/out is git-ignored. Each run starts
- * `node dist/src/cli/main.js --catalog FILE` in an 80×24 pseudo-terminal (script(1), util-linux),
+ * `node dist/bundle/headroom.js --catalog FILE` (what `headroom` runs; with --unbundled also the
+ * unbundled dist/src/cli/main.js, for comparison) in an 80×24 pseudo-terminal (script(1), util-linux),
  * waits for the home screen, then presses q. For scale it also times, in the same pseudo-terminal,
  * bare Node to its first output and a one-line Ink program to its first frame: the floors no
  * Node program, and no Ink program, can go under on the machine.
@@ -82,7 +83,8 @@ const { words, flags } = readArgs(process.argv.slice(2));
 const size = words[0] ?? '100k';
 const runs = Number(flags.get('runs') ?? 7);
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
-const main = join(root, 'dist', 'src', 'cli', 'main.js');
+const main = join(root, 'dist', 'bundle', 'headroom.js');
+const unbundled = join(root, 'dist', 'src', 'cli', 'main.js');
 const catalog = ensureCatalog(size);
 const env = { ...process.env, XDG_DATA_HOME: mkdtempSync(join(tmpdir(), 'headroom-bench-')), NO_COLOR: '' };
 
@@ -92,17 +94,19 @@ const programs = {
   node: [`node -e "process.stdout.write('ready')"`, 'ready'],
   ink: [`node ${inkHello}`, 'ready'],
   headroom: [`node ${main} --catalog ${catalog}`, HOME_MARKER],
+  ...(flags.has('unbundled') ? { unbundled: [`node ${unbundled} --catalog ${catalog}`, HOME_MARKER] } : {}),
 } as const;
-const times: Record<keyof typeof programs, number[]> = { node: [], ink: [], headroom: [] };
+const times: Record<string, number[]> = Object.fromEntries(Object.keys(programs).map((name) => [name, []]));
 // One run of each first, not counted: the file cache is warm for every counted run.
 for (const [command, marker] of Object.values(programs)) await timeToMarker(command, marker, env);
 for (let i = 0; i < runs; i++) {
-  for (const [name, [command, marker]] of Object.entries(programs)) times[name as keyof typeof programs].push(await timeToMarker(command, marker, env));
+  for (const [name, [command, marker]] of Object.entries(programs)) times[name]!.push(await timeToMarker(command, marker, env));
 }
-const { node: floor, ink, headroom } = times;
+const { node: floor = [], ink = [], headroom = [], unbundled: slow } = times;
 const ms = (values: number[]) => `median ${median(values).toFixed(0)} ms (min ${Math.min(...values).toFixed(0)}, max ${Math.max(...values).toFixed(0)})`;
 console.log(`catalog: ${catalog} (${sizeOf(size).toLocaleString('en')} parts), ${runs} runs, load average ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
 console.log(`headroom to its home screen: ${ms(headroom)}`);
+if (slow) console.log(`the same, unbundled modules: ${ms(slow)}`);
 console.log(`one-line Ink program to its first frame: ${ms(ink)}`);
 console.log(`bare node to its first output: ${ms(floor)}`);
 console.log(`headroom above the Ink floor: ${(median(headroom) - median(ink)).toFixed(0)} ms`);

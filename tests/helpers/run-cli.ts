@@ -1,7 +1,10 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 
-export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'src', 'cli', 'main.js');
+/** The bundled command line, as `headroom` and `npm start` run it (npm test builds first). */
+export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'bundle', 'headroom.js');
+/** The compiled modules behind it, for tests that call the core from a child process. */
+export const DIST_SRC = join(import.meta.dirname, '..', '..', 'dist', 'src');
 
 export interface CliRun {
   readonly status: number | null;

@@ -3,7 +3,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { demoSourcePath } from '../../src/catalog/index.js';
-import { CLI, runCli } from '../helpers/run-cli.js';
+import { CLI, DIST_SRC, runCli } from '../helpers/run-cli.js';
 import { syntheticCsv } from '../helpers/synthetic-csv.js';
 import { useTempDir } from '../helpers/temp-dir.js';
 
@@ -57,7 +57,7 @@ describe('a process killed mid-write', () => {
     const imported = runCli(['catalog', 'import', demoSourcePath()], env);
     expect(imported.status, imported.stderr).toBe(0);
     const script = join(dir, 'flip.mjs');
-    const catalogModule = join(CLI, '..', '..', 'catalog', 'index.js');
+    const catalogModule = join(DIST_SRC, 'catalog', 'index.js');
     writeFileSync(
       script,
       `const { openCatalog, changeApproval } = await import(${JSON.stringify(catalogModule)});
