@@ -16,10 +16,12 @@ import {
   CandidateScreen,
   CandidatesScreen,
   DesignOpenScreen,
+  EditPartScreen,
   PartScreen,
   PositionFormScreen,
   PositionScreen,
   RoleScreen,
+  SubstituteScreen,
   preloadScreens,
 } from './screens/lazy-screens.js';
 import type { ScreenProps } from './screens/screen-props.js';
@@ -59,6 +61,10 @@ function screenFor(route: Route, props: ScreenProps) {
       return <ApprovalScreen {...props} part={route.part} />;
     case 'add-part':
       return <AddPartScreen {...props} />;
+    case 'edit-part':
+      return <EditPartScreen {...props} part={route.part} />;
+    case 'substitute':
+      return <SubstituteScreen {...props} original={route.original} alternate={route.alternate} {...(route.session ? { session: route.session } : {})} />;
   }
 }
 

@@ -42,6 +42,9 @@ export const KEYS = {
   edit: { label: 'e', help: 'edit: back to the conditions', isTextSafe: false, matches: letter('e') },
   approval: { label: 'p', help: 'approval: change the state, see the trail', isTextSafe: false, matches: letter('p') },
   addPart: { label: 'n', help: 'add part: type a new part into the catalog', isTextSafe: false, matches: letter('n') },
+  substitute: { label: 'r', help: 'replace: is another part a safe drop-in for this one?', isTextSafe: false, matches: letter('r') },
+  chooseOriginal: { label: 'o', help: 'original: choose the part to be replaced', isTextSafe: false, matches: letter('o') },
+  exchange: { label: 'x', help: 'exchange: original and alternate change places', isTextSafe: false, matches: letter('x') },
   openDemo: { label: 'd', help: 'demo: open the demo catalog', isTextSafe: false, matches: letter('d') },
 } as const satisfies Record<string, Binding>;
 
@@ -147,7 +150,15 @@ const NO_KEY: Key = {
  */
 export function splitBurst(input: string, key: Key): { input: string; key: Key }[] {
   if (input.length < 2 || key.ctrl || key.meta || key.escape) return [{ input, key }];
-  return [...input.replace(/\r\n/g, '\r')].map((ch) =>
-    ch === '\r' || ch === '\n' ? { input: '\r', key: { ...NO_KEY, return: true } } : { input: ch, key: { ...NO_KEY } },
-  );
+  return [...input.replace(/\r\n/g, '\r')].map(burstKey);
+}
+
+/** One character of a burst as the key that sends it: Ctrl+U inside a burst still clears a field. */
+function burstKey(ch: string): { input: string; key: Key } {
+  const code = ch.codePointAt(0)!;
+  if (ch === '\r' || ch === '\n') return { input: '\r', key: { ...NO_KEY, return: true } };
+  if (ch === '\t') return { input: '\t', key: { ...NO_KEY, tab: true } };
+  if (ch === '\u007f' || ch === '\b') return { input: '', key: { ...NO_KEY, backspace: true } };
+  if (code >= 1 && code <= 26) return { input: String.fromCharCode(code + 96), key: { ...NO_KEY, ctrl: true } };
+  return { input: ch, key: { ...NO_KEY } };
 }

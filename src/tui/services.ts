@@ -31,6 +31,14 @@ export interface ApprovalRequest {
   readonly reason: string;
 }
 
+/** What an edit did. */
+export interface PartEdit {
+  readonly part: Part;
+  /** False when every value was as stored: nothing was written. */
+  readonly isChanged: boolean;
+  readonly isApprovalChanged: boolean;
+}
+
 export interface CatalogService {
   /** "demo" or the catalog's path. */
   readonly label: string;
@@ -41,10 +49,19 @@ export interface CatalogService {
   candidates(position: SolvedPosition, policy: DeratingPolicy): Promise<CandidateSearch>;
   teamPolicies(): readonly DeratingPolicy[];
   addPart(part: Part): Outcome<Part>;
+  /**
+   * Rewrites a stored part with edited values (same row, in one transaction); refused when the new
+   * maker and part number belong to another part. `value` is the part as stored after the edit.
+   */
+  updatePart(original: Part, edited: Part): Outcome<PartEdit>;
   changeApproval(part: Part, request: ApprovalRequest): Outcome<Part>;
   history(part: Part): readonly ApprovalEvent[];
-  /** The part as stored now (after an approval change), or null if it is gone. */
+  /** The part as stored now (after an approval change or an edit, renames followed), or null if it is gone. */
   find(part: Pick<Part, 'manufacturer' | 'partNumber'>): Part | null;
+  /** A part from what a design file or a person writes ("MAKER:PART" or "PART"), or null. */
+  lookup(reference: string): Part | null;
+  /** Parts that could sit on the original's footprint doing its job (same package, compatible kind). */
+  replacements(original: Part): readonly Part[];
 }
 
 export interface DesignService {

@@ -51,6 +51,11 @@ describe('bursts of keys', () => {
     expect(pieces.map((p) => [p.input, p.key.return])).toEqual([['2', false], ['d', false], ['°', false], ['\r', true], ['x', false]]);
   });
 
+  it('reads control characters inside a burst as the keys that send them', () => {
+    const pieces = splitBurst('\u0015a\u007f\tb', key());
+    expect(pieces.map((p) => commandFor(p.input, p.key, ['clearField', 'erase', 'nextField'], true) ?? p.input)).toEqual(['clearField', 'a', 'erase', 'nextField', 'b']);
+  });
+
   it('leaves single keys alone', () => {
     const enter = key({ return: true });
     expect(splitBurst('\r', enter)).toEqual([{ input: '\r', key: enter }]);

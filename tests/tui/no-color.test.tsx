@@ -38,3 +38,27 @@ describe('NO_COLOR', () => {
     expect(frame).toContain('› 1  New position');
   });
 });
+
+async function substitutionFrame(theme: ReturnType<typeof themeFor>) {
+  const { lastFrame, stdin } = renderApp(testServices(coilParts), { theme });
+  await press(stdin, '5');
+  await waitFor(lastFrame, 'Choose the original');
+  await press(stdin, '/', 'l', 'o', 'w', 'v', KEY.enter, KEY.enter);
+  await waitFor(lastFrame, 'ranked replacements of the original');
+  await press(stdin, KEY.enter);
+  await waitFor(lastFrame, 'DROP-IN');
+  return lastFrame();
+}
+
+describe('NO_COLOR on the substitution screen', () => {
+  it('has colour by default', async () => {
+    expect(await substitutionFrame(themeFor({}))).toMatch(COLOUR);
+  });
+
+  it('writes no colour, every verdict and rating still marked', async () => {
+    const frame = await substitutionFrame(themeFor({ NO_COLOR: '1' }));
+    expect(frame).not.toMatch(COLOUR);
+    expect(frame).toContain('✓ DROP-IN');
+    expect(frame.replace(/\u001b\[\d+m/g, '')).toMatch(/✓ VRRM\s+35.0 V\s+100 V\s+better/);
+  });
+});

@@ -3,6 +3,8 @@ import { CatalogError } from '../../catalog/catalog-error.js';
 import type { Catalog } from '../../catalog/open-catalog.js';
 import { listTeamPolicies } from '../../catalog/policy-repository.js';
 import { countParts, findPart, listParts, writeParts } from '../../catalog/part-repository.js';
+import { replacementCandidates } from '../../catalog/replacements.js';
+import { updatePart } from '../../catalog/update-part.js';
 import type { Part } from '../../parts/index.js';
 import type { PartSearch } from '../hooks/use-part-search.js';
 import type { CatalogService, PartPager } from '../services.js';
@@ -33,6 +35,14 @@ export function catalogService(catalog: Catalog, label: string, options: Catalog
     isSearchBacked = false;
   };
   const refOf = (part: Pick<Part, 'manufacturer' | 'partNumber'>) => `${part.manufacturer}:${part.partNumber}`;
+  // Screens hold parts by identity; after a rename here they still find the part under its new one.
+  const renamed = new Map<string, string>();
+  const keyOf = (part: Pick<Part, 'manufacturer' | 'partNumber'>) => refOf(part).toLowerCase();
+  const latestRef = (part: Pick<Part, 'manufacturer' | 'partNumber'>) => {
+    let reference = refOf(part);
+    for (let hops = 0; renamed.has(reference.toLowerCase()) && hops < 100; hops++) reference = renamed.get(reference.toLowerCase())!;
+    return reference;
+  };
   const service: CatalogService = {
     label,
     count: () => (count ??= countParts(catalog)),
@@ -71,14 +81,30 @@ export function catalogService(catalog: Catalog, label: string, options: Catalog
         return { ok: false, message: message(error) };
       }
     },
-    history: (part) => approvalHistory(catalog, part),
-    find: (part) => {
+    updatePart: (original, edited) => {
       try {
-        return findPart(catalog, refOf(part));
+        const r = updatePart(catalog, original, edited, { by: options.user, reason: 'edited in the terminal interface' });
+        if (!r.ok) return { ok: false, message: r.message };
+        if (r.isChanged) invalidate();
+        if (keyOf(original) !== keyOf(r.part)) {
+          renamed.set(keyOf(original), refOf(r.part));
+          renamed.delete(keyOf(r.part));
+        }
+        return { ok: true, value: { part: r.part, isChanged: r.isChanged, isApprovalChanged: r.isApprovalChanged } };
+      } catch (error) {
+        return { ok: false, message: message(error) };
+      }
+    },
+    history: (part) => approvalHistory(catalog, part),
+    find: (part) => service.lookup(latestRef(part)),
+    lookup: (reference) => {
+      try {
+        return findPart(catalog, reference);
       } catch {
         return null;
       }
     },
+    replacements: (original) => replacementCandidates(catalog, original),
   };
   return service;
 }

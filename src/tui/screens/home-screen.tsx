@@ -19,7 +19,7 @@ interface MenuItem {
 
 const COMMANDS: readonly ScreenCommand[] = [['up', 'previous'], ['down', 'next'], ['select', 'choose']];
 
-/** What to do: a new position, a position of a design file, the catalog, or help. */
+/** What to do: a new position, a position of a design file, the catalog, a substitute, or help. */
 export function HomeScreen({ width, height, isActive }: ScreenProps) {
   const theme = useTheme();
   const nav = useNavigator();
@@ -32,7 +32,8 @@ export function HomeScreen({ width, height, isActive }: ScreenProps) {
     { key: '2', title: 'Open a design file', about: 'pick a position of a design; write the chosen part into it', route: { name: 'open-design' } },
     { key: '3', title: 'Browse the catalog', about: `search all ${count.toLocaleString('en')} parts, see ratings, change approval`, route: { name: 'browse' } },
     { key: '4', title: 'Add a part', about: 'type a new part into the catalog, checked as you go', route: { name: 'add-part' } },
-    { key: '5', title: 'Keys and help', about: 'every key of the screen in view (press ? anywhere)', route: 'help' },
+    { key: '5', title: 'Check a substitute', about: 'is one part a safe drop-in for another? rating by rating', route: { name: 'substitute', original: null, alternate: null } },
+    { key: '6', title: 'Keys and help', about: 'every key of the screen in view (press ? anywhere)', route: 'help' },
   ];
   const choose = (item: MenuItem) => (item.route === 'help' ? help.setOpen(true) : nav.push(item.route));
   useKeys({ isActive, commands: COMMANDS }, (command, input) => {

@@ -18,6 +18,8 @@ const loaders = {
   part: () => import('./part-screen.js'),
   approval: () => import('./approval-screen.js'),
   addPart: () => import('./add-part-screen.js'),
+  editPart: () => import('./edit-part-screen.js'),
+  substitute: () => import('./substitute-screen.js'),
 };
 
 export const RoleScreen = lazy(async () => ({ default: (await loaders.role()).RoleScreen }));
@@ -31,6 +33,8 @@ export const BrowseScreen = lazy(async () => ({ default: (await loaders.browse()
 export const PartScreen = lazy(async () => ({ default: (await loaders.part()).PartScreen }));
 export const ApprovalScreen = lazy(async () => ({ default: (await loaders.approval()).ApprovalScreen }));
 export const AddPartScreen = lazy(async () => ({ default: (await loaders.addPart()).AddPartScreen }));
+export const EditPartScreen = lazy(async () => ({ default: (await loaders.editPart()).EditPartScreen }));
+export const SubstituteScreen = lazy(async () => ({ default: (await loaders.substitute()).SubstituteScreen }));
 
 /** Loads every screen module now; errors surface later, when the screen is opened. */
 export function preloadScreens(): void {

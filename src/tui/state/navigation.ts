@@ -16,7 +16,13 @@ export type Route =
   | { readonly name: 'browse' }
   | { readonly name: 'part'; readonly part: Part }
   | { readonly name: 'approval'; readonly part: Part }
-  | { readonly name: 'add-part' };
+  | { readonly name: 'add-part' }
+  | { readonly name: 'edit-part'; readonly part: Part }
+  /**
+   * Is the alternate a safe drop-in for the original? Either may still be unchosen (the screen
+   * offers a list); with a solved position, both are also judged against its limits.
+   */
+  | { readonly name: 'substitute'; readonly original: Part | null; readonly alternate: Part | null; readonly session?: PositionSession };
 
 export type RouteName = Route['name'];
 
