@@ -46,6 +46,8 @@ interface TemperatureGroup {
   readonly tjK: number;
   /** Sorted by ascending current. */
   readonly points: readonly ForwardVoltagePoint[];
+  /** estimateAtCurrent results by current, at the default ideality. */
+  readonly atCurrent: Map<number, AtCurrent>;
 }
 
 /**
@@ -67,7 +69,14 @@ export function estimateForwardVoltage(
     return { ok: false, code: 'no-points', message: 'No forward-voltage points: VF cannot be estimated.' };
   }
   const reference = nearestGroup(prepared.groups, tjK);
-  const atCurrent = estimateAtCurrent(reference, ifA, options.defaultIdeality ?? DEFAULT_IDEALITY);
+  const ideality = options.defaultIdeality ?? DEFAULT_IDEALITY;
+  // VF at a current within one temperature group does not depend on Tj: work it out once.
+  const isCached = ideality === DEFAULT_IDEALITY;
+  let atCurrent = isCached ? reference.atCurrent.get(ifA) : undefined;
+  if (atCurrent === undefined) {
+    atCurrent = estimateAtCurrent(reference, ifA, ideality);
+    if (isCached) reference.atCurrent.set(ifA, atCurrent);
+  }
   if (!atCurrent.ok) return atCurrent;
 
   const isTemperatureOutside = tjK < prepared.minTjK - SAME_TEMPERATURE_K || tjK > prepared.maxTjK + SAME_TEMPERATURE_K;
@@ -100,6 +109,26 @@ export function estimateForwardVoltage(
     tempcoVPerK,
     isExtrapolated: atCurrent.isExtrapolated || isTemperatureOutside,
   };
+}
+
+/**
+ * The value of estimateForwardVoltage alone (NaN where it gives no estimate), without building the
+ * words of its method: the loss model asks for thousands of values while ranking.
+ */
+export function forwardVoltageValue(points: readonly ForwardVoltagePoint[], ifA: number, tjK: number): number {
+  requirePositive('ifA', ifA);
+  requirePositive('tjK', tjK);
+  const prepared = prepare(points);
+  if (points.length === 0) return Number.NaN;
+  const reference = nearestGroup(prepared.groups, tjK);
+  let atCurrent = reference.atCurrent.get(ifA);
+  if (atCurrent === undefined) reference.atCurrent.set(ifA, (atCurrent = estimateAtCurrent(reference, ifA, DEFAULT_IDEALITY)));
+  if (!atCurrent.ok) return Number.NaN;
+  const deltaK = tjK - reference.tjK;
+  if (Math.abs(deltaK) < 1e-9) return atCurrent.vfV;
+  let tempco = prepared.tempcoByCurrent.get(ifA);
+  if (tempco === undefined) prepared.tempcoByCurrent.set(ifA, (tempco = pointsTempco(points, ifA)));
+  return atCurrent.vfV + (tempco?.vPerK ?? DEFAULT_TEMPCO_V_PER_K) * deltaK;
 }
 
 /** What depends on the points alone, worked out once per points array (parts are never mutated). */
@@ -135,15 +164,18 @@ function groupByTemperature(points: readonly ForwardVoltagePoint[]): Temperature
     if (group) group.points.push(p);
     else groups.push({ tjK: p.tjK, points: [p] });
   }
-  return groups.map((g) => ({ tjK: g.tjK, points: [...g.points].sort((x, y) => x.ifA - y.ifA) }));
+  return groups.map((g) => ({ tjK: g.tjK, points: [...g.points].sort((x, y) => x.ifA - y.ifA), atCurrent: new Map() }));
 }
 
 /** Nearest temperature; ties go to the group with more points, then to the cooler one. */
 function nearestGroup(groups: readonly TemperatureGroup[], tjK: number): TemperatureGroup {
-  const ranked = [...groups].sort(
-    (a, b) => Math.abs(a.tjK - tjK) - Math.abs(b.tjK - tjK) || b.points.length - a.points.length || a.tjK - b.tjK,
-  );
-  return ranked[0]!;
+  let best = groups[0]!;
+  for (let i = 1; i < groups.length; i++) {
+    const g = groups[i]!;
+    const order = Math.abs(g.tjK - tjK) - Math.abs(best.tjK - tjK) || best.points.length - g.points.length || g.tjK - best.tjK;
+    if (order < 0) best = g;
+  }
+  return best;
 }
 
 type AtCurrent =

@@ -136,6 +136,28 @@ function pointsAtVoltage(points: readonly LeakagePoint[], vrV: number): readonly
   return list;
 }
 
+/**
+ * The value of estimateLeakage alone (NaN without points), without building the words of its
+ * method: the loss model asks for thousands of values while ranking.
+ */
+export function leakageValue(points: readonly LeakagePoint[], vrV: number, tjK: number, family: JunctionFamily): number {
+  requireNonNegative('vrV', vrV);
+  requirePositive('tjK', tjK);
+  const perTemperature = pointsAtVoltage(points, vrV);
+  if (perTemperature.length === 0) return Number.NaN;
+  const pair = pickPair(perTemperature, tjK);
+  if (pair) {
+    const [a, b] = pair;
+    const c = Math.log(b.irA / a.irA) / (b.tjK - a.tjK);
+    if (c > 0) {
+      const anchor = Math.abs(tjK - a.tjK) <= Math.abs(tjK - b.tjK) ? a : b;
+      return leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK);
+    }
+  }
+  const anchor = nearest(perTemperature, tjK);
+  return leakageAtTemperature(anchor.irA, anchor.tjK, LEAKAGE_RULES[family].c, tjK);
+}
+
 function groupByTemperature(points: readonly LeakagePoint[]): LeakagePoint[][] {
   const groups: LeakagePoint[][] = [];
   for (const p of points) {
