@@ -1,47 +1,127 @@
 /**
- * Bundles the compiled command line (dist/src/cli/main.js) into dist/bundle/headroom.js and
- * lazily loaded chunks, which is what `headroom`, `npm start` and the command-line tests run.
- * Why: Node spends most of a cold start resolving, reading and compiling the hundreds of small
- * module files of Ink, React and our own layers (bench/README.md, start-up); one file per
- * command path cuts that several times. Each command group and screen stays its own chunk, so
- * `headroom pick` never loads Ink. Build tooling only: nothing in the core imports this file.
+ * Bundles the compiled modules (dist/src) into the two files `headroom` runs through
+ * src/cli/launch.ts: dist/bundle/cli.cjs (every command, without the interactive screens) and
+ * dist/bundle/app.cjs (everything, for `headroom` alone). Then runs one `pick` on the demo catalog
+ * so the launcher leaves a V8 code cache beside cli.cjs; app.cjs gets its cache on its first
+ * interactive run.
+ * Why: a cold Node 20 start spends most of its time resolving, reading and compiling hundreds of
+ * small modules (Ink, React, zod and our own layers); one CommonJS file per path, compiled from a
+ * code cache, starts several times faster (bench/README.md, start-up). CommonJS because only
+ * vm.Script takes a code cache on Node 20. Build tooling only: nothing in the core imports it.
  */
-import { build } from 'esbuild';
-import { rmSync } from 'node:fs';
-import { join } from 'node:path';
+import { build, type BuildOptions, type Plugin } from 'esbuild';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
 import { packageRoot } from '../catalog/package-root.js';
 
 const root = packageRoot();
-const outdir = join(root, 'dist', 'bundle');
+const dist = join(root, 'dist');
+const outdir = join(dist, 'bundle');
+const yogaDist = join(root, 'node_modules', 'yoga-layout', 'dist');
 rmSync(outdir, { recursive: true, force: true });
 
-const result = await build({
-  entryPoints: { headroom: join(root, 'dist', 'src', 'cli', 'main.js') },
+/**
+ * zod re-exports every message locale (about 280 KB of the 570 KB it adds) through a namespace the
+ * bundler cannot prune. Headroom words its own messages and zod uses English by default, so the
+ * bundle keeps English alone; `z.locales` then holds only `en`.
+ */
+const zodEnglishOnly: Plugin = {
+  name: 'zod-english-only',
+  setup(b) {
+    b.onResolve({ filter: /\/locales\/index\.js$/ }, (args) => (args.importer.includes(join('node_modules', 'zod')) ? { path: 'zod-locales', namespace: 'headroom' } : undefined));
+    b.onLoad({ filter: /^zod-locales$/, namespace: 'headroom' }, () => ({ contents: "export { default as en } from 'zod/v4/locales/en.js';", resolveDir: root }));
+  },
+};
+
+/** The command-line bundle leaves the screens out: the launcher sends screen starts to app.cjs. */
+const withoutScreens: Plugin = {
+  name: 'without-screens',
+  setup(b) {
+    b.onResolve({ filter: /\/tui\/start-tui\.js$/ }, () => ({ path: 'start-tui', namespace: 'headroom' }));
+    b.onLoad({ filter: /^start-tui$/, namespace: 'headroom' }, () => ({
+      contents: "export const startTui = () => { throw new Error('the interactive screens are in app.cjs; start headroom through dist/src/cli/launch.js'); };",
+    }));
+  },
+};
+
+/**
+ * Ink's layout engine (yoga-layout 3) awaits its WebAssembly at the top of its module, which only
+ * an ES module may do. Here it loads the same WebAssembly and wrapper, and the screens' entry
+ * waits for it before the first render; Ink reaches Yoga only while rendering. Ink's own top-level
+ * awaits serve its React devtools (DEV=true only), which the bundle leaves out.
+ */
+const inkAsCommonJs: Plugin = {
+  name: 'ink-as-commonjs',
+  setup(b) {
+    b.onResolve({ filter: /^yoga-layout$/ }, () => ({ path: 'yoga', namespace: 'headroom' }));
+    b.onLoad({ filter: /^yoga$/, namespace: 'headroom' }, () => ({
+      resolveDir: root,
+      contents: `import loadYoga from ${JSON.stringify(join(yogaDist, 'binaries', 'yoga-wasm-base64-esm.js'))};
+import wrapAssembly from ${JSON.stringify(join(yogaDist, 'src', 'wrapAssembly.js'))};
+export * from ${JSON.stringify(join(yogaDist, 'src', 'generated', 'YGEnums.js'))};
+let yoga;
+globalThis.__headroomYogaReady = loadYoga().then((lib) => { yoga = wrapAssembly(lib); });
+export default new Proxy({}, { get: (_, key) => yoga[key] });`,
+    }));
+    // The screens wait for the layout engine before their first render.
+    b.onResolve({ filter: /\/tui\/start-tui\.js$/ }, (args) => (args.namespace === 'headroom' ? undefined : { path: 'start-tui', namespace: 'headroom', pluginData: join(args.resolveDir, args.path) }));
+    b.onLoad({ filter: /^start-tui$/, namespace: 'headroom' }, (args) => ({
+      resolveDir: root,
+      contents: `import { startTui as start } from ${JSON.stringify(args.pluginData)};
+export async function startTui(options) { await globalThis.__headroomYogaReady; return start(options); }`,
+    }));
+    b.onLoad({ filter: /[\\/]ink[\\/]build[\\/]reconciler\.js$/ }, (args) => {
+      const text = readFileSync(args.path, 'utf8');
+      const devtools = "await import('./devtools.js');";
+      const packageJson = '? await loadPackageJson()';
+      // Pinned Ink version: if its source moves, fail the build rather than ship a guess.
+      if (!text.includes(devtools) || !text.includes(packageJson)) throw new Error(`ink-as-commonjs: ${args.path} changed; review this plugin`);
+      return { contents: text.replace(devtools, 'void 0;').replace(packageJson, '? {}'), loader: 'js', resolveDir: dirname(args.path) };
+    });
+  },
+};
+
+const common: BuildOptions = {
   bundle: true,
-  splitting: true,
-  format: 'esm',
+  format: 'cjs',
   platform: 'node',
   target: 'node20',
-  outdir,
-  chunkNames: 'chunks/[name]-[hash]',
-  // Native addon: loaded from node_modules at run time. The devtools client is optional in Ink
-  // and only imported when DEV=true; Ink then says how to install it.
-  external: ['better-sqlite3', 'react-devtools-core'],
+  // Native addon: loaded from node_modules at run time.
+  external: ['better-sqlite3'],
   define: {
     // React's production build: no development checks on every render.
     'process.env.NODE_ENV': '"production"',
     // Ink's layout engine asks `typeof fetch` to choose how to load its WebAssembly, and in Node 20
     // that first look at fetch loads the whole HTTP client (~50 ms). Nothing here fetches.
     fetch: 'undefined',
+    'import.meta.url': '__headroomModuleUrl',
   },
-  // Less source for V8 to parse at every start; names kept for readable stack traces.
+  banner: { js: "var __headroomModuleUrl = require('node:url').pathToFileURL(__filename).href;" },
+  // Less source for V8 to parse; names kept for readable stack traces.
   minifyWhitespace: true,
   minifySyntax: true,
-  // Bundled CommonJS packages call require(); give each ES chunk one.
-  banner: { js: "import { createRequire as __headroomRequire } from 'node:module'; const require = __headroomRequire(import.meta.url);" },
   logLevel: 'warning',
   metafile: true,
-});
+};
 
-const bytes = Object.values(result.metafile.outputs).reduce((sum, o) => sum + o.bytes, 0);
-console.log(`bundle: ${Object.keys(result.metafile.outputs).length} files, ${(bytes / 1e6).toFixed(1)} MB in ${outdir}`);
+const entry = [join(dist, 'src', 'cli', 'main.js')];
+const results = await Promise.all([
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, withoutScreens] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs] }),
+]);
+
+const bytes = results.flatMap((r) => Object.values(r.metafile!.outputs)).reduce((sum, o) => sum + o.bytes, 0);
+console.log(`bundle: cli.cjs and app.cjs, ${(bytes / 1e6).toFixed(1)} MB in ${outdir}`);
+
+// One typical command leaves the code cache for the command-line bundle.
+const data = mkdtempSync(join(tmpdir(), 'headroom-build-'));
+const trained = spawnSync(
+  process.execPath,
+  [join(dist, 'src', 'cli', 'launch.js'), '--demo', 'pick', join(root, 'catalog-demo', 'roles', 'buck-freewheel.yaml'), '--ref', 'D4'],
+  { env: { ...process.env, XDG_DATA_HOME: data, NO_COLOR: '1' }, encoding: 'utf8' },
+);
+rmSync(data, { recursive: true, force: true });
+if (trained.status !== 0) throw new Error(`bundle check failed: headroom pick exited ${trained.status}\n${trained.stderr}`);
+console.log('bundle: checked with `headroom --demo pick` (code cache written)');

@@ -56,7 +56,8 @@ const SAME_TEMPERATURE_K = 0.5;
 interface AtVoltage {
   readonly irA: number;
   readonly tjK: number;
-  readonly note: string;
+  /** Words for the method, built only when read: the solver asks for values thousands of times. */
+  readonly note: () => string;
   readonly isExtrapolated: boolean;
 }
 
@@ -74,17 +75,10 @@ export function estimateLeakage(
 ): LeakageEstimate {
   requireNonNegative('vrV', vrV);
   requirePositive('tjK', tjK);
-  for (const p of points) {
-    requirePositive('point.irA', p.irA);
-    requirePositive('point.vrV', p.vrV);
-    requirePositive('point.tjK', p.tjK);
-  }
-  if (points.length === 0) {
+  const perTemperature = pointsAtVoltage(points, vrV);
+  if (perTemperature.length === 0) {
     return { ok: false, code: 'no-points', message: 'No reverse-leakage points: IR cannot be estimated.' };
   }
-  const perTemperature = groupByTemperature(points)
-    .map((group) => atVoltage(group, vrV))
-    .sort((a, b) => a.tjK - b.tjK);
   const lowest = perTemperature[0]!;
   const highest = perTemperature[perTemperature.length - 1]!;
   const isTemperatureOutside = tjK < lowest.tjK - SAME_TEMPERATURE_K || tjK > highest.tjK + SAME_TEMPERATURE_K;
@@ -99,7 +93,9 @@ export function estimateLeakage(
         ok: true,
         value: leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK),
         c,
-        method: `two-point exponential fit IR = IR1·exp(c·(T − T1)) through ${a.note} and ${b.note}: c = ${formatNumber(c)} /K`,
+        get method() {
+          return `two-point exponential fit IR = IR1·exp(c·(T − T1)) through ${a.note()} and ${b.note()}: c = ${formatNumber(c)} /K`;
+        },
         isExtrapolated: isTemperatureOutside || a.isExtrapolated || b.isExtrapolated,
       };
     }
@@ -111,9 +107,55 @@ export function estimateLeakage(
     ok: true,
     value: leakageAtTemperature(anchor.irA, anchor.tjK, rule.c, tjK),
     c: rule.c,
-    method: `from ${anchor.note}${fallback}${rule.description}: c = ${formatNumber(rule.c)} /K`,
+    get method() {
+      return `from ${anchor.note()}${fallback}${rule.description}: c = ${formatNumber(rule.c)} /K`;
+    },
     isExtrapolated: isTemperatureOutside || anchor.isExtrapolated || Math.abs(tjK - anchor.tjK) >= SAME_TEMPERATURE_K,
   };
+}
+
+// The loss model asks for IR of the same part at one VR and many temperatures: validate the points
+// and take them to that VR once per points array and VR (parts are never mutated).
+const AT_VOLTAGE = new WeakMap<readonly LeakagePoint[], Map<number, readonly AtVoltage[]>>();
+
+/** One point per datasheet temperature, taken to vrV, coolest first. */
+function pointsAtVoltage(points: readonly LeakagePoint[], vrV: number): readonly AtVoltage[] {
+  let byVoltage = AT_VOLTAGE.get(points);
+  const known = byVoltage?.get(vrV);
+  if (known) return known;
+  for (const p of points) {
+    requirePositive('point.irA', p.irA);
+    requirePositive('point.vrV', p.vrV);
+    requirePositive('point.tjK', p.tjK);
+  }
+  const list = groupByTemperature(points)
+    .map((group) => atVoltage(group, vrV))
+    .sort((a, b) => a.tjK - b.tjK);
+  if (!byVoltage) AT_VOLTAGE.set(points, (byVoltage = new Map()));
+  byVoltage.set(vrV, list);
+  return list;
+}
+
+/**
+ * The value of estimateLeakage alone (NaN without points), without building the words of its
+ * method: the loss model asks for thousands of values while ranking.
+ */
+export function leakageValue(points: readonly LeakagePoint[], vrV: number, tjK: number, family: JunctionFamily): number {
+  requireNonNegative('vrV', vrV);
+  requirePositive('tjK', tjK);
+  const perTemperature = pointsAtVoltage(points, vrV);
+  if (perTemperature.length === 0) return Number.NaN;
+  const pair = pickPair(perTemperature, tjK);
+  if (pair) {
+    const [a, b] = pair;
+    const c = Math.log(b.irA / a.irA) / (b.tjK - a.tjK);
+    if (c > 0) {
+      const anchor = Math.abs(tjK - a.tjK) <= Math.abs(tjK - b.tjK) ? a : b;
+      return leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK);
+    }
+  }
+  const anchor = nearest(perTemperature, tjK);
+  return leakageAtTemperature(anchor.irA, anchor.tjK, LEAKAGE_RULES[family].c, tjK);
 }
 
 function groupByTemperature(points: readonly LeakagePoint[]): LeakagePoint[][] {
@@ -132,7 +174,7 @@ function atVoltage(group: readonly LeakagePoint[], vrV: number): AtVoltage {
   const covering = byVoltage.find((p) => p.vrV >= vrV);
   const where = (p: LeakagePoint): string => `${formatSi(p.irA, 'A')} at ${formatSi(p.vrV, 'V')}, ${formatCelsius(p.tjK)}`;
   if (covering) {
-    const note = covering.vrV > vrV ? `${where(covering)} (upper bound for ${formatSi(vrV, 'V')})` : where(covering);
+    const note = () => (covering.vrV > vrV ? `${where(covering)} (upper bound for ${formatSi(vrV, 'V')})` : where(covering));
     return { irA: covering.irA, tjK: covering.tjK, note, isExtrapolated: false };
   }
   const top = byVoltage[byVoltage.length - 1]!;
@@ -140,7 +182,7 @@ function atVoltage(group: readonly LeakagePoint[], vrV: number): AtVoltage {
   return {
     irA: top.irA * scale,
     tjK: top.tjK,
-    note: `${where(top)} scaled ×${formatNumber(scale)} linearly to ${formatSi(vrV, 'V')}`,
+    note: () => `${where(top)} scaled ×${formatNumber(scale)} linearly to ${formatSi(vrV, 'V')}`,
     isExtrapolated: true,
   };
 }

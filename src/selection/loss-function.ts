@@ -96,27 +96,27 @@ export function compileLoss(shape: LossShape): LossFunction {
     return Math.max(0, (v1 - rd * c.conductingA) * c.avgA + rd * c.rmsA * c.rmsA);
   };
   const reverseAt = (t: number, s: Segment): number => (r ? r.vrV * r.duty * Math.exp(s.ln[0] + s.ln[1] * t) : 0);
-  const lowest = (l: readonly [number, number], t1: number, t2: number) => Math.min(l[0] + l[1] * t1, l[0] + l[1] * t2);
+  const lowest = (intercept: number, slope: number, t1: number, t2: number) => Math.min(intercept + slope * t1, intercept + slope * t2);
+  const k = c ? c.rmsA * c.rmsA - c.conductingA * c.avgA : 0;
   /*
    * Within one interval VF and rd are straight lines, so conduction = VF·IF(AV) + max(0, rd)·K with
    * K = IF(RMS)² − I·IF(AV) ≥ 0 is the larger of two straight lines: at least the larger of their
-   * minima. Reverse loss is monotone in Tj (exponential), switching constant.
+   * minima. Reverse loss is monotone in Tj (exponential), switching constant. No allocation: the
+   * runaway proof calls this for every cell of every part ranked.
    */
   const lowerBound = (t1: number, t2: number): number => {
     const s = segmentAt((t1 + t2) / 2);
     let conductionW = 0;
     if (c) {
-      const flat = lowest(s.v1, t1, t2) * c.avgA;
+      const flat = lowest(s.v1[0], s.v1[1], t1, t2) * c.avgA;
       if (!hasSlope) conductionW = Math.max(0, flat);
       else {
-        const k = c.rmsA * c.rmsA - c.conductingA * c.avgA;
         const d = c.peakA - c.conductingA;
-        const sloped: [number, number] = [s.v1[0] * c.avgA + ((s.v2[0] - s.v1[0]) / d) * k, s.v1[1] * c.avgA + ((s.v2[1] - s.v1[1]) / d) * k];
-        const withRd = lowest(sloped, t1, t2);
+        const withRd = lowest(s.v1[0] * c.avgA + ((s.v2[0] - s.v1[0]) / d) * k, s.v1[1] * c.avgA + ((s.v2[1] - s.v1[1]) / d) * k, t1, t2);
         conductionW = Math.max(0, k >= 0 ? Math.max(flat, withRd) : Math.min(flat, withRd));
       }
     }
-    const reverseW = r ? r.vrV * r.duty * Math.exp(lowest(s.ln, t1, t2)) : 0;
+    const reverseW = r ? r.vrV * r.duty * Math.exp(lowest(s.ln[0], s.ln[1], t1, t2)) : 0;
     return conductionW + reverseW + shape.switchingW;
   };
   return {

@@ -1,5 +1,5 @@
 import type { OperatingPoint } from '../circuits/limits.js';
-import { estimateForwardVoltage, estimateLeakage } from '../physics/index.js';
+import { estimateForwardVoltage, forwardVoltageValue, leakageValue } from '../physics/index.js';
 import { junctionFamily, type Part } from '../parts/index.js';
 import { formatQuantity } from '../units/index.js';
 import type { LossBreakdown } from './evaluation.js';
@@ -96,8 +96,8 @@ function conduction(part: Part, op: OperatingPoint): Term<ConductionShape> {
     }
   }
   const vfAt = (ifA: number, tjK: number) => {
-    const e = estimateForwardVoltage(part.vfPoints, ifA, tjK);
-    return e.ok ? e.value : 0;
+    const v = forwardVoltageValue(part.vfPoints, ifA, tjK);
+    return Number.isNaN(v) ? 0 : v;
   };
   const hasSlope = i.peakA > i.conductingA * (1 + 1e-6);
   const q = (a: number) => formatQuantity(a, 'current');
@@ -127,8 +127,8 @@ function reverse(part: Part, op: OperatingPoint): Term<ReverseShape> {
     return { ok: true, shape: undefined, note: () => 'no IR points: reverse loss left out (small for a PN or SiC junction)' };
   }
   const lnIrAt = (tjK: number) => {
-    const e = estimateLeakage(part.irPoints, b.vrV, tjK, family);
-    return e.ok ? Math.log(e.value) : Number.NEGATIVE_INFINITY;
+    const v = leakageValue(part.irPoints, b.vrV, tjK, family);
+    return Number.isNaN(v) ? Number.NEGATIVE_INFINITY : Math.log(v);
   };
   return {
     ok: true,

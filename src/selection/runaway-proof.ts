@@ -11,6 +11,9 @@ const CELLS = 48;
  */
 export function provesRunaway(model: LossModel, ambientK: number, rthJaKPerW: number, tjMaxK: number): boolean {
   if (!(tjMaxK > ambientK)) return true;
+  // Most parts hold at Tj max itself (Ta + RθJA·P(Tj max) ≤ Tj max), so a balance lies at or below
+  // it: nothing to prove, and one evaluation instead of a cell walk. "Not proven" is always safe.
+  if (ambientK + rthJaKPerW * model.totalAt(tjMaxK) <= tjMaxK) return false;
   const step = (tjMaxK - ambientK) / CELLS;
   const cuts = [ambientK, tjMaxK, ...model.breakpoints.filter((t) => t > ambientK && t < tjMaxK)];
   for (let i = 1; i < CELLS; i++) cuts.push(ambientK + i * step);

@@ -1,8 +1,8 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 
-/** The bundled command line, as `headroom` and `npm start` run it (npm test builds first). */
-export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'bundle', 'headroom.js');
+/** The command line as `headroom` and `npm start` run it: the launcher and its bundles (npm test builds first). */
+export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'src', 'cli', 'launch.js');
 /** The compiled modules behind it, for tests that call the core from a child process. */
 export const DIST_SRC = join(import.meta.dirname, '..', '..', 'dist', 'src');
 

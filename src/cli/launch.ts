@@ -1,0 +1,56 @@
+#!/usr/bin/env node
+/**
+ * What `headroom` runs: a command goes to dist/bundle/cli.cjs (the commands without the
+ * interactive screens), `headroom` alone to app.cjs (everything), each compiled with V8's code
+ * cache.
+ * Why: on Node 20 most of a cold start is compiling JavaScript; a code cache made by an earlier
+ * run lets V8 skip that (bench/README.md, start-up). The cache is an optimisation only: a missing,
+ * stale or rejected cache (other Node version, other flags) means a normal compile, and the run
+ * then leaves a fresh cache behind for the next one. Build: src/build/bundle.ts.
+ */
+import { readFileSync, renameSync, statSync, writeFileSync } from 'node:fs';
+import Module, { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { Script } from 'node:vm';
+
+const bundleDir = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'bundle');
+
+function loadBundle(name: string): void {
+  const file = join(bundleDir, `${name}.cjs`);
+  // V8 checks a cache against the source's length, not its text: name the cache after the
+  // bundle's size and time so a rebuilt bundle never meets an old cache.
+  const { size, mtimeMs } = statSync(file);
+  const cacheFile = `${file}.${size}-${Math.trunc(mtimeMs)}.cache`;
+  let cachedData: Buffer | undefined;
+  try {
+    cachedData = readFileSync(cacheFile);
+  } catch {
+    cachedData = undefined;
+  }
+  // The bundle keeps the entry's #! line, which is not JavaScript inside a function wrapper.
+  const source = readFileSync(file, 'utf8').replace(/^#!.*/, '');
+  const script = new Script(Module.wrap(source), { filename: file, cachedData });
+  const module = { exports: {} as unknown };
+  script.runInThisContext()(module.exports, createRequire(file), module, file, bundleDir);
+  if (cachedData === undefined || script.cachedDataRejected || process.env.HEADROOM_REFRESH_CODE_CACHE === '1') {
+    // At exit the cache also holds every function this run compiled, not just the top level.
+    process.once('exit', () => {
+      try {
+        const temp = `${cacheFile}.${process.pid}`;
+        writeFileSync(temp, script.createCachedData());
+        renameSync(temp, cacheFile);
+      } catch {
+        // A read-only install runs without a cache: slower to start, nothing else.
+      }
+    });
+  }
+}
+
+/** The same test as main.ts: no command word and no help or version asked for opens the screens. */
+function opensScreens(args: readonly string[]): boolean {
+  const words = args.filter((a, i) => !a.startsWith('-') && args[i - 1] !== '--catalog');
+  return words.length === 0 && !args.some((a) => ['--help', '-h', '--version', '-V'].includes(a));
+}
+
+loadBundle(opensScreens(process.argv.slice(2)) ? 'app' : 'cli');
