@@ -83,6 +83,37 @@ export async function startTui(options) { await globalThis.__headroomYogaReady; 
   },
 };
 
+/**
+ * Ink measures every piece of text with string-width, which builds an Intl.Segmenter when it loads
+ * and segments each string into graphemes: tens of milliseconds before the first screen. Here the
+ * segmenter is made on first need, and text that isNarrowText accepts (all of Headroom's own
+ * screens) is measured by its length, which string-width would answer too (tests/build).
+ */
+const quickTextWidth: Plugin = {
+  name: 'quick-text-width',
+  setup(b) {
+    b.onLoad({ filter: /[\\/]string-width[\\/]index\.js$/ }, (args) => {
+      const text = readFileSync(args.path, 'utf8');
+      const segmenter = 'const segmenter = new Intl.Segmenter();';
+      const entry = 'export default function stringWidth(';
+      // Pinned versions: if their source moves, fail the build rather than ship a guess.
+      if (!text.includes(segmenter) || !text.includes(entry)) throw new Error(`quick-text-width: ${args.path} changed; review this plugin`);
+      const patched = text
+        .replace(segmenter, 'let segmenterMade; const segmenter = { segment: (s) => (segmenterMade ??= new Intl.Segmenter()).segment(s) };')
+        .replace(entry, 'function fullStringWidth(');
+      return {
+        contents: `${patched}
+import { isNarrowText } from ${JSON.stringify(join(dist, 'src', 'build', 'narrow-text.js'))};
+export default function stringWidth(string, options) {
+  return typeof string === 'string' && isNarrowText(string) ? string.length : fullStringWidth(string, options);
+}`,
+        loader: 'js',
+        resolveDir: dirname(args.path),
+      };
+    });
+  },
+};
+
 const common: BuildOptions = {
   bundle: true,
   format: 'cjs',
@@ -109,7 +140,7 @@ const common: BuildOptions = {
 const entry = [join(dist, 'src', 'cli', 'main.js')];
 const results = await Promise.all([
   build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, withoutScreens] }),
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs, quickTextWidth] }),
 ]);
 
 const bytes = results.flatMap((r) => Object.values(r.metafile!.outputs)).reduce((sum, o) => sum + o.bytes, 0);

@@ -65,11 +65,11 @@ describe('the launcher and its code cache', () => {
       let quit = false;
       const timer = setTimeout(() => {
         child.kill('SIGKILL');
-        reject(new Error(`no home screen within 20 s:\n${text.slice(-800)}`));
+        reject(new Error(`no home screen with the part count within 20 s:\n${text.slice(-800)}`));
       }, 20_000);
       child.stdout.on('data', (d: Buffer) => {
         text += d.toString('utf8');
-        if (!quit && text.includes('Keys and help')) {
+        if (!quit && text.includes('112 parts')) {
           quit = true;
           child.stdin.write('q');
         }

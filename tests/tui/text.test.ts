@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { displayWidth, fit, fitRight, truncate, wrap } from '../../src/tui/text/fit.js';
+import { displayWidth, fit, fitRight, groupDigits, truncate, wrap } from '../../src/tui/text/fit.js';
 import { lineText, wrapStyled } from '../../src/tui/text/styled.js';
 
 describe('fitting text to columns', () => {
@@ -42,5 +42,11 @@ describe('wrapping', () => {
     const lines = wrapStyled([{ text: 'pass ', tone: 'good' }, { text: 'tightest margin here', tone: 'muted' }], 10);
     expect(lines[0]![0]).toEqual({ text: 'pass', tone: 'good' });
     expect(lines.flat().filter((s) => s.tone === 'muted').map((s) => s.text.trim()).filter(Boolean)).toEqual(['tightest', 'margin', 'here']);
+  });
+});
+
+describe('groupDigits', () => {
+  it('groups thousands as toLocaleString("en") does', () => {
+    for (const n of [0, 7, 999, 1000, 12345, 100000, 1000000, 123456789]) expect(groupDigits(n)).toBe(n.toLocaleString('en'));
   });
 });

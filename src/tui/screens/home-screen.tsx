@@ -1,4 +1,5 @@
 import { Box, Text } from 'ink';
+import { useEffect, useState } from 'react';
 import { ScreenFrame } from '../components/screen-frame.js';
 import { useHelp, useKeys } from '../hooks/use-keys.js';
 import { useNavigator } from '../hooks/use-navigator.js';
@@ -7,7 +8,7 @@ import { useSyncState } from '../hooks/use-sync-state.js';
 import { useTheme } from '../hooks/use-theme.js';
 import type { ScreenCommand } from '../keys.js';
 import type { Route } from '../state/navigation.js';
-import { fit, wrap } from '../text/fit.js';
+import { fit, groupDigits, wrap } from '../text/fit.js';
 import type { ScreenProps } from './screen-props.js';
 
 interface MenuItem {
@@ -26,11 +27,17 @@ export function HomeScreen({ width, height, isActive }: ScreenProps) {
   const help = useHelp();
   const { catalog } = useServices();
   const [cursor, setCursor, getCursor] = useSyncState(0);
-  const count = catalog.count();
+  // Counting a large catalog's parts takes a scan: the menu shows first, the count a moment later.
+  const [isPainted, setPainted] = useState(false);
+  useEffect(() => {
+    const timer = setTimeout(() => setPainted(true), 0);
+    return () => clearTimeout(timer);
+  }, []);
+  const count = isPainted ? groupDigits(catalog.count()) : null;
   const items: MenuItem[] = [
     { key: '1', title: 'New position', about: 'describe a position; see its limits and the ranked parts', route: { name: 'roles' } },
     { key: '2', title: 'Open a design file', about: 'pick a position of a design; write the chosen part into it', route: { name: 'open-design' } },
-    { key: '3', title: 'Browse the catalog', about: `search all ${count.toLocaleString('en')} parts, see ratings, change approval`, route: { name: 'browse' } },
+    { key: '3', title: 'Browse the catalog', about: `search all ${count ?? 'the'} parts, see ratings, change approval`, route: { name: 'browse' } },
     { key: '4', title: 'Add a part', about: 'type a new part into the catalog, checked as you go', route: { name: 'add-part' } },
     { key: '5', title: 'Check a substitute', about: 'is one part a safe drop-in for another? rating by rating', route: { name: 'substitute', original: null, alternate: null } },
     { key: '6', title: 'Keys and help', about: 'every key of the screen in view (press ? anywhere)', route: 'help' },
@@ -53,7 +60,7 @@ export function HomeScreen({ width, height, isActive }: ScreenProps) {
         {intro.map((line, i) => (
           <Text key={i}>{line}</Text>
         ))}
-        <Text color={theme.muted}>{fit(`Catalog: ${catalog.label} · ${count.toLocaleString('en')} parts`, width - 2)}</Text>
+        <Text color={theme.muted}>{fit(`Catalog: ${catalog.label} · ${count === null ? 'counting parts…' : `${count} parts`}`, width - 2)}</Text>
         <Text> </Text>
         {items.map((item, i) => (
           <Box key={item.key} flexDirection={isWide ? 'row' : 'column'}>

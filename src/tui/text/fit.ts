@@ -33,3 +33,8 @@ export function fitRight(text: string, width: number): string {
 export function wrap(text: string, width: number, hangingIndent = 0): string[] {
   return text.split('\n').flatMap((paragraph) => wrapStyled([{ text: paragraph }], width, hangingIndent).map(lineText));
 }
+
+/** 100000 → "100,000": as toLocaleString('en') writes it, without loading a locale at start-up. */
+export function groupDigits(n: number): string {
+  return String(n).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+}
