@@ -25,13 +25,18 @@ rmSync(outdir, { recursive: true, force: true });
 /**
  * zod re-exports every message locale (about 280 KB of the 570 KB it adds) through a namespace the
  * bundler cannot prune. Headroom words its own messages and zod uses English by default, so the
- * bundle keeps English alone; `z.locales` then holds only `en`.
+ * bundle keeps English alone; `z.locales` then holds only `en`. Also left out: z.fromJSONSchema.
  */
 const zodEnglishOnly: Plugin = {
   name: 'zod-english-only',
   setup(b) {
     b.onResolve({ filter: /\/locales\/index\.js$/ }, (args) => (args.importer.includes(join('node_modules', 'zod')) ? { path: 'zod-locales', namespace: 'headroom' } : undefined));
     b.onLoad({ filter: /^zod-locales$/, namespace: 'headroom' }, () => ({ contents: "export { default as en } from 'zod/v4/locales/en.js';", resolveDir: root }));
+    // z.fromJSONSchema (unused here) spreads zod's whole namespace into a table as it loads.
+    b.onResolve({ filter: /\/from-json-schema\.js$/ }, (args) => (args.importer.includes(join('node_modules', 'zod')) ? { path: 'zod-from-json-schema', namespace: 'headroom' } : undefined));
+    b.onLoad({ filter: /^zod-from-json-schema$/, namespace: 'headroom' }, () => ({
+      contents: "export function fromJSONSchema() { throw new Error('z.fromJSONSchema is not part of the Headroom bundle'); }",
+    }));
   },
 };
 
@@ -84,29 +89,60 @@ export async function startTui(options) { await globalThis.__headroomYogaReady; 
 };
 
 /**
- * Ink measures every piece of text with string-width, which builds an Intl.Segmenter when it loads
- * and segments each string into graphemes: tens of milliseconds before the first screen. Here the
- * segmenter is made on first need, and text that isNarrowText accepts (all of Headroom's own
- * screens) is measured by its length, which string-width would answer too (tests/build).
+ * Ink measures every piece of text with string-width and slices it with slice-ansi; both build an
+ * Intl.Segmenter and Unicode-property regular expressions as they load (ICU data: tens of
+ * milliseconds before the first screen). Here string-width's body is set up on first need, text
+ * that isNarrowText accepts once its escape codes are stripped (all of Headroom's own screens) is
+ * measured by its length, which string-width would answer too (tests/build), and slice-ansi makes
+ * its segmenter on first use.
  */
 const quickTextWidth: Plugin = {
   name: 'quick-text-width',
   setup(b) {
     b.onLoad({ filter: /[\\/]string-width[\\/]index\.js$/ }, (args) => {
       const text = readFileSync(args.path, 'utf8');
-      const segmenter = 'const segmenter = new Intl.Segmenter();';
+      const lines = text.split('\n');
+      const body = lines.findIndex((line) => line.trim() !== '' && !line.startsWith('import '));
       const entry = 'export default function stringWidth(';
       // Pinned versions: if their source moves, fail the build rather than ship a guess.
-      if (!text.includes(segmenter) || !text.includes(entry)) throw new Error(`quick-text-width: ${args.path} changed; review this plugin`);
-      const patched = text
-        .replace(segmenter, 'let segmenterMade; const segmenter = { segment: (s) => (segmenterMade ??= new Intl.Segmenter()).segment(s) };')
-        .replace(entry, 'function fullStringWidth(');
+      if (!text.includes(entry) || !text.includes("import stripAnsi from 'strip-ansi';") || text.split('export ').length !== 2) {
+        throw new Error(`quick-text-width: ${args.path} changed; review this plugin`);
+      }
       return {
-        contents: `${patched}
+        contents: `${lines.slice(0, body).join('\n')}
 import { isNarrowText } from ${JSON.stringify(join(dist, 'src', 'build', 'narrow-text.js'))};
+function setUp() {
+${lines.slice(body).join('\n').replace(entry, 'function fullStringWidth(')}
+return fullStringWidth;
+}
+let full;
 export default function stringWidth(string, options) {
-  return typeof string === 'string' && isNarrowText(string) ? string.length : fullStringWidth(string, options);
+  if (typeof string === 'string' && !options?.countAnsiEscapeCodes) {
+    const plain = string.includes('\\u001b') ? stripAnsi(string) : string;
+    if (isNarrowText(plain)) return plain.length;
+  }
+  return (full ??= setUp())(string, options);
 }`,
+        loader: 'js',
+        resolveDir: dirname(args.path),
+      };
+    });
+    b.onLoad({ filter: /[\\/]slice-ansi[\\/]tokenize-ansi\.js$/ }, (args) => {
+      const text = readFileSync(args.path, 'utf8');
+      const eager = "const GRAPHEME_SEGMENTER = new Intl.Segmenter(undefined, {granularity: 'grapheme'});";
+      if (!text.includes(eager)) throw new Error(`quick-text-width: ${args.path} changed; review this plugin`);
+      const lazy = "let graphemeSegmenter; const GRAPHEME_SEGMENTER = { segment: (s) => (graphemeSegmenter ??= new Intl.Segmenter(undefined, {granularity: 'grapheme'})).segment(s) };";
+      return { contents: text.replace(eager, lazy), loader: 'js', resolveDir: dirname(args.path) };
+    });
+    // Ink tokenises every styled line it writes, grapheme by grapheme.
+    b.onLoad({ filter: /[\\/]@alcalzone[\\/]ansi-tokenize[\\/]build[\\/]tokenize\.js$/ }, (args) => {
+      const text = readFileSync(args.path, 'utf8');
+      const eager = 'const segmenter = new Intl.Segmenter(undefined, { granularity: "grapheme" });';
+      if (!text.includes(eager) || text.split('segmenter.segment(str)').length !== 2) throw new Error(`quick-text-width: ${args.path} changed; review this plugin`);
+      return {
+        contents: `import { narrowGraphemes } from ${JSON.stringify(join(dist, 'src', 'build', 'narrow-text.js'))};
+${text
+  .replace(eager, 'let graphemeSegmenter; const segmenter = { segment: (s) => narrowGraphemes(s) ?? (graphemeSegmenter ??= new Intl.Segmenter(undefined, { granularity: "grapheme" })).segment(s) };')}`,
         loader: 'js',
         resolveDir: dirname(args.path),
       };

@@ -27,3 +27,20 @@ function isNarrowCharacter(c: number): boolean {
     c === 0x25b2 || c === 0x25bc || c === 0x2713 || c === 0x2717 // ▲ ▼ ✓ ✗
   );
 }
+
+/**
+ * The graphemes of a text that holds only escape characters and characters isNarrowText accepts:
+ * each code unit is a grapheme of its own there (an escape is a control, which stands alone), so
+ * Intl.Segmenter is not needed. Undefined for any other text. tests/build holds this to the
+ * segmenter's own answers.
+ */
+export function narrowGraphemes(text: string): { segment: string; index: number }[] | undefined {
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 0x1b || (c >= 0x20 && c <= 0x7e)) continue;
+    if (!isNarrowCharacter(c)) return undefined;
+  }
+  const graphemes = new Array<{ segment: string; index: number }>(text.length);
+  for (let i = 0; i < text.length; i++) graphemes[i] = { segment: text[i]!, index: i };
+  return graphemes;
+}

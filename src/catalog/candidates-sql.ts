@@ -1,13 +1,6 @@
 import type { Limit, RatedField } from '../circuits/limits.js';
 import type { SolvedPosition } from '../circuits/role.js';
-import {
-  PART_FIELDS,
-  isRectifying,
-  rectifyingPartSchema,
-  tvsPartSchema,
-  zenerPartSchema,
-  type PartKind,
-} from '../parts/index.js';
+import { PART_FIELDS, requiredRatings, type PartKind } from '../parts/index.js';
 import { formatQuantity } from '../units/index.js';
 import { HALF_SCORE_HEADROOM, PRICE_FLOOR, SCORE_WEIGHTS, marginValue } from '../selection/index.js';
 
@@ -34,16 +27,9 @@ const RECOVERY: ReadonlySet<RatedField> = new Set(['trrS', 'qrrC']);
 /** Headroom never exceeds 1, so no margin term exceeds this (tightest plus the others' mean). */
 export const MARGIN_CEILING = (SCORE_WEIGHTS.tightest + SCORE_WEIGHTS.others) * marginValue(1);
 
-function schemaOf(kind: PartKind) {
-  return isRectifying(kind) ? rectifyingPartSchema : kind === 'zener' ? zenerPartSchema : tvsPartSchema;
-}
-
-/** True when every kind's schema requires the rating, so the column is never NULL for them. */
+/** True when every kind requires the rating (part-schema.ts), so the column is never NULL for them. */
 function isAlwaysPresent(field: RatedField, kinds: readonly PartKind[]): boolean {
-  return kinds.every((kind) => {
-    const shape = schemaOf(kind).shape as Record<string, { safeParse(v: unknown): { success: boolean } } | undefined>;
-    return shape[field] !== undefined && !shape[field]!.safeParse(undefined).success;
-  });
+  return kinds.every((kind) => requiredRatings(kind).includes(field));
 }
 
 type RatingLimit = Limit & { check: { kind: 'rating'; rating: RatedField } };

@@ -1,4 +1,4 @@
-import { partSchema } from '../parts/index.js';
+import { partSchema } from '../parts/part-schema.js';
 import type { Catalog } from './open-catalog.js';
 import { ROW_COLUMNS, rowToPart, type PartRow } from './part-rows.js';
 

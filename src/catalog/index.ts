@@ -10,6 +10,7 @@ export * from './part-repository.js';
 export * from './row-issue.js';
 export * from './package-root.js';
 export * from './policy-repository.js';
+export * from './save-team-policy.js';
 export * from './approval-repository.js';
 export * from './group-repository.js';
 export * from './load-parts-source.js';

@@ -1,13 +1,6 @@
 import { describeKind, parseQuantity, type QuantityKind } from '../units/index.js';
-import {
-  PART_FIELDS,
-  fieldByColumn,
-  partSchema,
-  type IrPoint,
-  type Part,
-  type PartField,
-  type VfPoint,
-} from '../parts/index.js';
+import { PART_FIELDS, fieldByColumn, type IrPoint, type Part, type PartField, type VfPoint } from '../parts/index.js';
+import { partSchema } from '../parts/part-schema.js';
 
 /** One problem with one cell of outside input; the caller adds the file and line. */
 export interface CellIssue {

@@ -1,4 +1,3 @@
-import { z } from 'zod';
 
 /**
  * A derating policy: how much of each rating a design may use. Policies are data so a team
@@ -86,24 +85,6 @@ export const BUILT_IN_POLICIES: readonly DeratingPolicy[] = [
 ];
 
 export const DEFAULT_POLICY_ID = 'commercial';
-
-const factorSchema = z.object({
-  value: z.number().gt(0).max(1),
-  source: z.string().trim().min(1),
-});
-
-/** Schema for a team's own policy, as stored in the catalog or written in a design file. */
-export const deratingPolicySchema = z.object({
-  id: z.string().regex(/^[a-z0-9][a-z0-9-]*$/, 'lower-case letters, digits and hyphens, e.g. "our-automotive"'),
-  name: z.string().trim().min(1),
-  description: z.string().default(''),
-  factors: z.object({ vrrm: factorSchema, ifAv: factorSchema, ifsm: factorSchema, pd: factorSchema, pppm: factorSchema }),
-  tj: z.object({
-    ceilingK: z.number().min(273.15).max(773.15).optional(),
-    marginBelowMaxK: z.number().min(0).max(200),
-    source: z.string().trim().min(1),
-  }),
-});
 
 /** The Tj a part may reach under a policy. */
 export function tjCeilingK(policy: DeratingPolicy, tjMaxK: number): number {

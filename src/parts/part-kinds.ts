@@ -45,6 +45,20 @@ export function isTvs(kind: PartKind): boolean {
   return kind === 'tvs-uni' || kind === 'tvs-bi';
 }
 
+/**
+ * Ratings a part of each kind must give (part-schema.ts enforces them; tests/parts hold the two
+ * together). A plain list, so ranking can rely on them without building the validation schemas.
+ */
+const REQUIRED_RATINGS = {
+  rectifying: ['vrrmV', 'ifAvA', 'tjMaxK', 'vfPoints'],
+  zener: ['vzV', 'vzTol', 'iztA', 'pdW', 'tjMaxK'],
+  tvs: ['vrwmV', 'vbrMinV', 'vcV', 'ippA', 'pppmW', 'pppmRiseS', 'pppmDecayS', 'tjMaxK'],
+} as const;
+
+export function requiredRatings(kind: PartKind): readonly string[] {
+  return isRectifying(kind) ? REQUIRED_RATINGS.rectifying : kind === 'zener' ? REQUIRED_RATINGS.zener : REQUIRED_RATINGS.tvs;
+}
+
 /** Junction family, which decides the leakage and recovery models. */
 export function junctionFamily(kind: PartKind): 'pn' | 'schottky' | 'sic' {
   if (kind === 'schottky') return 'schottky';

@@ -1,13 +1,11 @@
 import { userInfo } from 'node:os';
 import { render } from 'ink';
-import { ensureDemoCatalog } from '../catalog/demo-catalog.js';
 import { openCatalog, type Catalog } from '../catalog/open-catalog.js';
 import { App } from './app.js';
 import { ThemeContext } from './hooks/use-theme.js';
 import { catalogService } from './io/catalog-service.js';
-import { designService } from './io/design-service.js';
 import { substringSearch, type PartSearch } from './hooks/use-part-search.js';
-import type { PartPager, TuiServices } from './services.js';
+import type { DesignService, PartPager, TuiServices } from './services.js';
 import { themeFor } from './theme.js';
 
 export interface StartOptions {
@@ -41,10 +39,24 @@ export async function startTui({ catalogPath, isDemo, hasCatalog }: StartOptions
   let loaded: typeof import('./io/query-search.js') | undefined;
   const search: PartSearch = (parts, query) => (loaded?.querySearch ?? substringSearch)(parts, query);
   const options = { user, search, searchPager: (catalog: Catalog, browse: PartPager) => loaded?.searchPager(catalog, browse) };
+  // The demo is offered only when there is no catalog yet: only then load the importer it needs.
+  const demo = hasCatalog ? undefined : await import('../catalog/demo-catalog.js');
+  // Design files (YAML) are only read on the design screens: that module loads just after the
+  // first frame. In the bundle the import settles before any key can be read.
+  let designs: DesignService | undefined;
+  const afterFirstFrame = new Proxy({} as DesignService, {
+    get: (_, key) => {
+      if (!designs) throw new Error('design files are still loading; try again');
+      return designs[key as keyof DesignService];
+    },
+  });
   const services: TuiServices = {
     catalog: hasCatalog ? catalogService(open(catalogPath), isDemo ? 'demo' : catalogPath, options) : null,
-    openDemo: () => catalogService(open(ensureDemoCatalog()), 'demo', options),
-    designs: designService(),
+    openDemo: () => {
+      if (!demo) throw new Error('the demo catalog is offered only when no catalog is open');
+      return catalogService(open(demo.ensureDemoCatalog()), 'demo', options);
+    },
+    designs: afterFirstFrame,
     user,
     search,
     queryProblems: (text) => loaded?.queryProblems(text) ?? [],
@@ -55,6 +67,7 @@ export async function startTui({ catalogPath, isDemo, hasCatalog }: StartOptions
     </ThemeContext.Provider>,
     { exitOnCtrlC: false },
   );
+  void import('./io/design-service.js').then((m) => (designs = m.designService()));
   setTimeout(() => {
     import('./io/query-search.js').then(
       (m) => (loaded = m),

@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import stringWidth from 'string-width';
 import { describe, expect, it } from 'vitest';
-import { isNarrowText } from '../../src/build/narrow-text.js';
+import { isNarrowText, narrowGraphemes } from '../../src/build/narrow-text.js';
 import { packageRoot } from '../../src/catalog/index.js';
 
 // The bundle answers Ink's width questions with text.length wherever isNarrowText holds, and asks
@@ -41,5 +41,26 @@ describe('isNarrowText', () => {
     for (const text of ['\u001b[1mbold\u001b[22m', 'tab\there', 'e\u0301', '⚠', '✅', '漢字', 'soft\u00adhyphen', 'a\u200bb']) {
       expect(isNarrowText(text), JSON.stringify(text)).toBe(false);
     }
+  });
+});
+
+describe('narrowGraphemes', () => {
+  const segmenter = new Intl.Segmenter(undefined, { granularity: 'grapheme' });
+  const styled = fc.array(fc.oneof(fc.constantFrom(...narrowCharacters), fc.constantFrom('\u001b[1m', '\u001b[22m', '\u001b[90m', '\u001b[39m', '\u001b[7m', '\u001b]8;;x\u0007')), { maxLength: 40 });
+
+  it('splits styled narrow text exactly as Intl.Segmenter does, one code unit a grapheme', () => {
+    fc.assert(
+      fc.property(styled, (parts) => {
+        const text = parts.join('').replace(/\u0007/g, '');
+        const ours = narrowGraphemes(text);
+        expect(ours).toBeDefined();
+        expect(ours).toEqual([...segmenter.segment(text)].map(({ segment, index }) => ({ segment, index })));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('leaves everything else to the segmenter', () => {
+    for (const text of ['e\u0301', '👍🏽', '漢字', 'a\r\nb', '\u0007']) expect(narrowGraphemes(text)).toBeUndefined();
   });
 });

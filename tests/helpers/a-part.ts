@@ -1,4 +1,5 @@
-import { partSchema, type Part, type PartInput } from '../../src/parts/index.js';
+import type { Part, PartInput } from '../../src/parts/index.js';
+import { partSchema } from '../../src/parts/part-schema.js';
 
 const BASES: Record<string, PartInput> = {
   schottky: {

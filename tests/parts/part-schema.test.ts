@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { normalisePackage, partSchema } from '../../src/parts/index.js';
+import { normalisePackage, requiredRatings } from '../../src/parts/index.js';
+import { partSchema } from '../../src/parts/part-schema.js';
 import { aPart } from '../helpers/a-part.js';
 
 const messages = (input: unknown) => {
@@ -64,5 +65,18 @@ describe('part schema', () => {
   ])('normalises package "%s" to "%s"', (typed, canonical) => {
     expect(normalisePackage(typed)).toBe(canonical);
     expect(aPart('schottky', { package: typed }).package).toBe(canonical);
+  });
+});
+
+describe('required ratings', () => {
+  // Ranking trusts requiredRatings() to know which columns are never empty; the schema decides.
+  it('lists exactly the ratings each kind\'s schema refuses to leave out', async () => {
+    const { rectifyingPartSchema, zenerPartSchema, tvsPartSchema } = await import('../../src/parts/part-schema.js');
+    const identity = new Set(['manufacturer', 'partNumber', 'package', 'kind']);
+    for (const [kind, schema] of [['schottky', rectifyingPartSchema], ['zener', zenerPartSchema], ['tvs-uni', tvsPartSchema]] as const) {
+      const shape = schema.shape as Record<string, { safeParse(v: unknown): { success: boolean } }>;
+      const required = Object.keys(shape).filter((key) => !identity.has(key) && !shape[key]!.safeParse(undefined).success);
+      expect(required.sort()).toEqual([...requiredRatings(kind)].sort());
+    }
   });
 });

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { readPartsText, writePartsText, type PartFileFormat } from '../../src/catalog/index.js';
-import { partSchema } from '../../src/parts/index.js';
+import { partSchema } from '../../src/parts/part-schema.js';
 import { aPart } from '../helpers/a-part.js';
 import { FUZZ_RUNS, FUZZ_TIMEOUT_MS } from './fuzz-runs.js';
 

@@ -1,6 +1,6 @@
 import { describe, expect, expectTypeOf, it } from 'vitest';
 import { z } from 'zod';
-import { quantitySchema } from '../../src/units/index.js';
+import { quantitySchema } from '../../src/units/quantity-schema.js';
 
 function messagesOf(schema: z.ZodType<number, number | string>, input: unknown): string[] {
   const result = schema.safeParse(input);

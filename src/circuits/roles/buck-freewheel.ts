@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { quantitySchema } from '../../units/index.js';
+import { quantitySchema } from '../../units/quantity-schema.js';
 import { safetyCautions, type Caution } from '../caution.js';
 import type { DeratingPolicy } from '../derating.js';
 import { Derivation, q } from '../derivation.js';

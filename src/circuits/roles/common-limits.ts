@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { expectedForm } from '../../units/quantity-kinds.js';
-import { formatQuantity, quantitySchema, type QuantityKind, type QuantitySchemaOptions } from '../../units/index.js';
+import { formatQuantity, type QuantityKind } from '../../units/index.js';
+import { quantitySchema, type QuantitySchemaOptions } from '../../units/quantity-schema.js';
 import type { DeratingFactor, DeratingPolicy } from '../derating.js';
 import type { Derivation } from '../derivation.js';
 import type { Limit, OperatingPoint, RatedField } from '../limits.js';

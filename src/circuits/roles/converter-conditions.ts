@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { quantitySchema } from '../../units/index.js';
+import { quantitySchema } from '../../units/quantity-schema.js';
 import { q } from '../derivation.js';
 import { checkMinMax, requiredQuantity } from './common-limits.js';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { quantitySchema } from '../../units/index.js';
+import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape } from './common-limits.js';
 import { checkConverterRanges, checkVoutMax, converterShape } from './converter-conditions.js';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { quantitySchema } from '../../units/index.js';
+import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
 import { solveSignalClamp } from './signal-clamp-solve.js';

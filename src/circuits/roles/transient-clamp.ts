@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { parseWaveform, quantitySchema, type Waveform } from '../../units/index.js';
+import { parseWaveform, type Waveform } from '../../units/index.js';
+import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, requiredQuantity, checkMinMax } from './common-limits.js';
 import { SURGE_PRESET_IDS } from './transient-clamp-presets.js';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { formatQuantity, quantitySchema } from '../../units/index.js';
+import { formatQuantity } from '../../units/index.js';
+import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
 import { solveZenerRegulator } from './zener-regulator-solve.js';

@@ -1,5 +1,6 @@
 import type { CellIssue } from '../../catalog/part-cells.js';
-import { PART_FIELDS, partSchema, safeText, type Part, type PartField } from '../../parts/index.js';
+import { PART_FIELDS, safeText, type Part, type PartField } from '../../parts/index.js';
+import { partSchema } from '../../parts/part-schema.js';
 import { formatQuantity, parseQuantity, type QuantityKind } from '../../units/index.js';
 import { checkPart, partRows, type PartCheck } from './part-form.js';
 

@@ -4,13 +4,11 @@ import {
   PART_KINDS,
   isRectifying,
   isTvs,
-  rectifyingPartSchema,
-  tvsPartSchema,
-  zenerPartSchema,
   type Part,
   type PartField,
   type PartKind,
 } from '../../parts/index.js';
+import { rectifyingPartSchema, tvsPartSchema, zenerPartSchema } from '../../parts/part-schema.js';
 
 /** Fields every part has, in the form's order. */
 const IDENTITY = ['kind', 'manufacturer', 'partNumber', 'package', 'description', 'lifecycle', 'approval', 'approvalNote', 'secondSourceGroup', 'unitPrice', 'currency', 'datasheetUrl', 'notes'];
