@@ -28,8 +28,9 @@ function loadBundle(name: string): void {
   } catch {
     cachedData = undefined;
   }
+  // The bundles are ASCII (src/build/bundle.ts): read as Latin-1, V8 keeps one byte a character.
   // The bundle keeps the entry's #! line, which is not JavaScript inside a function wrapper.
-  const source = readFileSync(file, 'utf8').replace(/^#!.*/, '');
+  const source = readFileSync(file, 'latin1').replace(/^#!.*/, '');
   const script = new Script(Module.wrap(source), { filename: file, cachedData });
   const module = { exports: {} as unknown };
   script.runInThisContext()(module.exports, createRequire(file), module, file, bundleDir);
