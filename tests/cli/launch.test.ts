@@ -58,7 +58,8 @@ describe('the launcher and its code cache', () => {
 
   // script(1) (util-linux) gives the screens a pseudo-terminal, as a user's terminal would.
   it.runIf(spawnSync('script', ['--version']).status === 0)('opens the screens from the bundle in a terminal and quits on q', async () => {
-    const env = { ...process.env, XDG_DATA_HOME: join(tempDir(), 'data'), NO_COLOR: '1' };
+    // A person's terminal: under CI=true Ink writes only the last frame, at exit.
+    const env = { ...process.env, XDG_DATA_HOME: join(tempDir(), 'data'), NO_COLOR: '1', CI: 'false', CONTINUOUS_INTEGRATION: 'false' };
     const output = await new Promise<string>((resolve, reject) => {
       const child = spawn('script', ['-qfec', `stty cols 80 rows 24; exec ${JSON.stringify(process.execPath)} ${JSON.stringify(CLI)} --demo`, '/dev/null'], { env });
       let text = '';
