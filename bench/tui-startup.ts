@@ -86,7 +86,8 @@ const root = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const main = join(root, 'dist', 'src', 'cli', 'launch.js');
 const unbundled = join(root, 'dist', 'src', 'cli', 'main.js');
 const catalog = ensureCatalog(size);
-const env = { ...process.env, XDG_DATA_HOME: mkdtempSync(join(tmpdir(), 'headroom-bench-')), NO_COLOR: '' };
+// A person's terminal: under CI=true Ink writes only its last frame.
+const env = { ...process.env, XDG_DATA_HOME: mkdtempSync(join(tmpdir(), 'headroom-bench-')), NO_COLOR: '', CI: 'false', CONTINUOUS_INTEGRATION: 'false' };
 
 const inkHello = join(outDirectory(), 'ink-hello.mjs');
 writeFileSync(inkHello, "import { createElement } from 'react';\nimport { render, Text } from 'ink';\nconst app = render(createElement(Text, null, 'ready'));\nprocess.stdin.once('data', () => app.unmount());\n");
