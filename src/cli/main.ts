@@ -69,10 +69,18 @@ async function main(argv: string[]): Promise<number> {
   }
 }
 
+/**
+ * Done: leave now rather than when V8's background work (concurrent marking and compiling) winds
+ * down, which held a finished `headroom pick` for about 20 ms (bench/README.md, start-up). Only
+ * with nothing still queued for stdout or stderr, so no output is ever cut short.
+ */
+function finish(code: number): void {
+  process.exitCode = code;
+  if (process.stdout.writableLength === 0 && process.stderr.writableLength === 0) process.exit(code);
+}
+
 main(process.argv).then(
-  (code) => {
-    process.exitCode = code;
-  },
+  finish,
   (error: unknown) => {
     process.stderr.write(`headroom: internal error: ${(error as Error)?.stack ?? String(error)}\n`);
     process.exitCode = 70;
