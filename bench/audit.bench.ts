@@ -23,7 +23,7 @@ const ROLES = ['buck-freewheel', 'rectifier', 'boost-output', 'flyback-output', 
 const { words, flags } = readArgs(process.argv.slice(2));
 const runs = Number(flags.get('runs') ?? 5);
 const count = Number(flags.get('positions') ?? 500);
-const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.js');
+const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.cjs');
 
 function templates(): { role: string; conditions: Record<string, unknown>; policy?: string }[] {
   return ROLES.flatMap((role) => {

@@ -29,7 +29,7 @@ const runs = Number(flags.get('runs') ?? 15);
 const cliRuns = Number(flags.get('cli-runs') ?? 5);
 const ms = (x: number) => x.toFixed(1).padStart(7);
 const design = (role: string) => join(packageRoot(), 'catalog-demo', 'roles', `${role}.yaml`);
-const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.js');
+const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.cjs');
 
 for (const size of words.length > 0 ? words : ['10k', '100k', '1m']) {
   const path = ensurePickCatalog(size, (line) => console.log(line));

@@ -4,7 +4,7 @@
  *   npm run build && node dist/bench/tui-startup.js [100k] [--runs 7]
  * The catalog is bench/out/tui-catalog-SIZE.sqlite, built once with the synthetic generator
  * (bench/synthetic-parts.ts, seed 42); bench/out is git-ignored. Each run starts
- * `node dist/src/cli/launch.js --catalog FILE` (what `headroom` runs; with --unbundled also the
+ * `node dist/src/cli/launch.cjs --catalog FILE` (what `headroom` runs; with --unbundled also the
  * unbundled dist/src/cli/main.js, for comparison) in an 80×24 pseudo-terminal (script(1), util-linux),
  * waits for the home screen, then presses q. For scale it also times, in the same pseudo-terminal,
  * bare Node to its first output and a one-line Ink program to its first frame: the floors no
@@ -83,7 +83,7 @@ const { words, flags } = readArgs(process.argv.slice(2));
 const size = words[0] ?? '100k';
 const runs = Number(flags.get('runs') ?? 7);
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
-const main = join(root, 'dist', 'src', 'cli', 'launch.js');
+const main = join(root, 'dist', 'src', 'cli', 'launch.cjs');
 const unbundled = join(root, 'dist', 'src', 'cli', 'main.js');
 const catalog = ensureCatalog(size);
 // A person's terminal: under CI=true Ink writes only its last frame.

@@ -1,6 +1,6 @@
 /**
  * Bundles the compiled modules (dist/src) into the two files `headroom` runs through
- * src/cli/launch.ts: dist/bundle/cli.cjs (every command, without the interactive screens) and
+ * src/cli/launch.cts: dist/bundle/cli.cjs (every command, without the interactive screens) and
  * dist/bundle/app.cjs (everything, for `headroom` alone). Then runs one `pick` on the demo catalog
  * so the launcher leaves a V8 code cache beside cli.cjs; app.cjs gets its cache on its first
  * interactive run.
@@ -11,7 +11,7 @@
  */
 import { build, type BuildOptions, type Plugin } from 'esbuild';
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { packageRoot } from '../catalog/package-root.js';
@@ -46,7 +46,7 @@ const withoutScreens: Plugin = {
   setup(b) {
     b.onResolve({ filter: /\/tui\/start-tui\.js$/ }, () => ({ path: 'start-tui', namespace: 'headroom' }));
     b.onLoad({ filter: /^start-tui$/, namespace: 'headroom' }, () => ({
-      contents: "export const startTui = () => { throw new Error('the interactive screens are in app.cjs; start headroom through dist/src/cli/launch.js'); };",
+      contents: "export const startTui = () => { throw new Error('the interactive screens are in app.cjs; start headroom through dist/src/cli/launch.cjs'); };",
     }));
   },
 };
@@ -150,14 +150,28 @@ ${text
   },
 };
 
+/**
+ * better-sqlite3's JavaScript goes into the bundle (compiled from the code cache with the rest);
+ * only its native addon is loaded from node_modules. The `bindings` package it would use to find
+ * the addon searches from the calling file, which inside a bundle is the wrong place.
+ */
+const sqliteAddon: Plugin = {
+  name: 'sqlite-addon',
+  setup(b) {
+    b.onResolve({ filter: /^bindings$/ }, (args) => (args.importer.includes(join('node_modules', 'better-sqlite3')) ? { path: 'bindings', namespace: 'headroom' } : undefined));
+    b.onLoad({ filter: /^bindings$/, namespace: 'headroom' }, () => ({
+      loader: 'js',
+      contents: "const { dirname, join } = require('node:path'); const packageJson = ['better-sqlite3', 'package.json'].join('/'); module.exports = (name) => require(join(dirname(require.resolve(packageJson)), 'build', 'Release', name));",
+    }));
+  },
+};
+
 const common: BuildOptions = {
   absWorkingDir: root,
   bundle: true,
   format: 'cjs',
   platform: 'node',
   target: 'node20',
-  // Native addon: loaded from node_modules at run time.
-  external: ['better-sqlite3'],
   define: {
     // React's production build: no development checks on every render.
     'process.env.NODE_ENV': '"production"',
@@ -176,8 +190,8 @@ const common: BuildOptions = {
 
 const entry = [join(dist, 'src', 'cli', 'main.js')];
 const results = await Promise.all([
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, withoutScreens] }),
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs, quickTextWidth] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, withoutScreens, sqliteAddon] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs, quickTextWidth, sqliteAddon] }),
 ]);
 
 /*
@@ -196,11 +210,14 @@ for (const file of results.flatMap((r) => Object.keys(r.metafile!.outputs))) {
 const bytes = results.flatMap((r) => Object.values(r.metafile!.outputs)).reduce((sum, o) => sum + o.bytes, 0);
 console.log(`bundle: cli.cjs and app.cjs, ${(bytes / 1e6).toFixed(1)} MB in ${outdir}`);
 
+// `headroom` is the launcher itself (package.json bin): runnable as a file, too.
+chmodSync(join(dist, 'src', 'cli', 'launch.cjs'), 0o755);
+
 // One typical command leaves the code cache for the command-line bundle.
 const data = mkdtempSync(join(tmpdir(), 'headroom-build-'));
 const trained = spawnSync(
   process.execPath,
-  [join(dist, 'src', 'cli', 'launch.js'), '--demo', 'pick', join(root, 'catalog-demo', 'roles', 'buck-freewheel.yaml'), '--ref', 'D4'],
+  [join(dist, 'src', 'cli', 'launch.cjs'), '--demo', 'pick', join(root, 'catalog-demo', 'roles', 'buck-freewheel.yaml'), '--ref', 'D4'],
   { env: { ...process.env, XDG_DATA_HOME: data, NO_COLOR: '1' }, encoding: 'utf8' },
 );
 rmSync(data, { recursive: true, force: true });

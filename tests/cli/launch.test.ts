@@ -13,7 +13,7 @@ const root = packageRoot();
 function installCopy(): string {
   const dir = tempDir();
   mkdirSync(join(dir, 'dist', 'src', 'cli'), { recursive: true });
-  cpSync(CLI, join(dir, 'dist', 'src', 'cli', 'launch.js'));
+  cpSync(CLI, join(dir, 'dist', 'src', 'cli', 'launch.cjs'));
   mkdirSync(join(dir, 'dist', 'bundle'));
   for (const name of ['cli.cjs', 'app.cjs']) cpSync(join(root, 'dist', 'bundle', name), join(dir, 'dist', 'bundle', name));
   for (const name of ['package.json', 'node_modules', 'migrations', 'catalog-demo']) symlinkSync(join(root, name), join(dir, name));
@@ -25,7 +25,7 @@ const caches = (dir: string) => readdirSync(join(dir, 'dist', 'bundle')).filter(
 describe('the launcher and its code cache', () => {
   it('runs a command without a cache, leaves one, and uses it the next time with the same output', () => {
     const dir = installCopy();
-    const launch = join(dir, 'dist', 'src', 'cli', 'launch.js');
+    const launch = join(dir, 'dist', 'src', 'cli', 'launch.cjs');
     const env = { XDG_DATA_HOME: join(dir, 'data') };
     const first = runCliAt(launch, ['--demo', 'roles', '--json'], env);
     expect(first.status, first.stderr).toBe(0);
@@ -37,7 +37,7 @@ describe('the launcher and its code cache', () => {
 
   it('ignores a damaged cache: the command still runs and the cache is written anew', () => {
     const dir = installCopy();
-    const launch = join(dir, 'dist', 'src', 'cli', 'launch.js');
+    const launch = join(dir, 'dist', 'src', 'cli', 'launch.cjs');
     const env = { XDG_DATA_HOME: join(dir, 'data') };
     expect(runCliAt(launch, ['--version'], env).status).toBe(0);
     const [cache] = caches(dir);

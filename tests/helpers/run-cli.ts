@@ -2,7 +2,7 @@ import { spawn, spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 
 /** The command line as `headroom` and `npm start` run it: the launcher and its bundles (npm test builds first). */
-export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'src', 'cli', 'launch.js');
+export const CLI = join(import.meta.dirname, '..', '..', 'dist', 'src', 'cli', 'launch.cjs');
 /** The compiled modules behind it, for tests that call the core from a child process. */
 export const DIST_SRC = join(import.meta.dirname, '..', '..', 'dist', 'src');
 

@@ -10,11 +10,11 @@
  */
 import { readFileSync, renameSync, statSync, writeFileSync } from 'node:fs';
 import Module, { createRequire } from 'node:module';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
 import { Script } from 'node:vm';
 
-const bundleDir = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'bundle');
+// CommonJS (.cts), unlike the rest: Node starts a CommonJS entry without its ES module loader.
+const bundleDir = join(__dirname, '..', '..', 'bundle');
 
 function loadBundle(name: string): void {
   const file = join(bundleDir, `${name}.cjs`);
