@@ -15,14 +15,24 @@ export function provesRunaway(model: LossModel, ambientK: number, rthJaKPerW: nu
   // it: nothing to prove, and one evaluation instead of a cell walk. "Not proven" is always safe.
   if (ambientK + rthJaKPerW * model.totalAt(tjMaxK) <= tjMaxK) return false;
   const step = (tjMaxK - ambientK) / CELLS;
-  const cuts = [ambientK, tjMaxK, ...model.breakpoints.filter((t) => t > ambientK && t < tjMaxK)];
-  for (let i = 1; i < CELLS; i++) cuts.push(ambientK + i * step);
-  cuts.sort((a, b) => a - b);
-  for (let i = 1; i < cuts.length; i++) {
-    const t1 = cuts[i - 1]!;
-    const t2 = cuts[i]!;
-    if (t2 - t1 < 1e-9) continue;
-    if (ambientK + rthJaKPerW * model.lowerBound(t1, t2) <= t2) return false;
+  // Cells of the uniform grid, each split at the model's breakpoints (sorted) inside it; walked
+  // without building arrays, since ranking proves this for every part it reads.
+  const breakpoints = model.breakpoints;
+  let next = 0;
+  while (next < breakpoints.length && breakpoints[next]! <= ambientK) next++;
+  let t1 = ambientK;
+  const holds = (t2: number) => ambientK + rthJaKPerW * model.lowerBound(t1, t2) <= t2;
+  for (let i = 1; i <= CELLS; i++) {
+    const end = i === CELLS ? tjMaxK : ambientK + i * step;
+    while (next < breakpoints.length && breakpoints[next]! < end) {
+      const t2 = breakpoints[next++]!;
+      if (t2 - t1 < 1e-9) continue;
+      if (holds(t2)) return false;
+      t1 = t2;
+    }
+    if (end - t1 < 1e-9) continue;
+    if (holds(end)) return false;
+    t1 = end;
   }
   return true;
 }
