@@ -83,35 +83,45 @@ export function estimateLeakage(
   const highest = perTemperature[perTemperature.length - 1]!;
   const isTemperatureOutside = tjK < lowest.tjK - SAME_TEMPERATURE_K || tjK > highest.tjK + SAME_TEMPERATURE_K;
 
-  const pair = pickPair(perTemperature, tjK);
-  if (pair) {
-    const [a, b] = pair;
-    const c = Math.log(b.irA / a.irA) / (b.tjK - a.tjK);
-    if (c > 0) {
-      const anchor = Math.abs(tjK - a.tjK) <= Math.abs(tjK - b.tjK) ? a : b;
-      return {
-        ok: true,
-        value: leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK),
-        c,
-        get method() {
-          return `two-point exponential fit IR = IR1·exp(c·(T − T1)) through ${a.note()} and ${b.note()}: c = ${formatNumber(c)} /K`;
-        },
-        isExtrapolated: isTemperatureOutside || a.isExtrapolated || b.isExtrapolated,
-      };
-    }
+  const fit = fitAt(perTemperature, tjK, family);
+  const { anchor, c } = fit;
+  if (fit.pair) {
+    const [a, b] = fit.pair;
+    return {
+      ok: true,
+      value: leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK),
+      c,
+      get method() {
+        return `two-point exponential fit IR = IR1·exp(c·(T − T1)) through ${a.note()} and ${b.note()}: c = ${formatNumber(c)} /K`;
+      },
+      isExtrapolated: isTemperatureOutside || a.isExtrapolated || b.isExtrapolated,
+    };
   }
   const rule = LEAKAGE_RULES[family];
-  const anchor = nearest(perTemperature, tjK);
-  const fallback = pair ? '; the points do not rise with temperature, so ' : '; ';
+  const fallback = fit.hadPair ? '; the points do not rise with temperature, so ' : '; ';
   return {
     ok: true,
-    value: leakageAtTemperature(anchor.irA, anchor.tjK, rule.c, tjK),
-    c: rule.c,
+    value: leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK),
+    c,
     get method() {
       return `from ${anchor.note()}${fallback}${rule.description}: c = ${formatNumber(rule.c)} /K`;
     },
     isExtrapolated: isTemperatureOutside || anchor.isExtrapolated || Math.abs(tjK - anchor.tjK) >= SAME_TEMPERATURE_K,
   };
+}
+
+/**
+ * The exponential through the two points bracketing Tj when they rise with temperature, anchored
+ * at the nearer one; else the family's rule of thumb from the nearest point.
+ */
+function fitAt(perTemperature: readonly AtVoltage[], tjK: number, family: JunctionFamily): { anchor: AtVoltage; c: number; pair?: [AtVoltage, AtVoltage]; hadPair: boolean } {
+  const pair = pickPair(perTemperature, tjK);
+  if (pair) {
+    const [a, b] = pair;
+    const c = Math.log(b.irA / a.irA) / (b.tjK - a.tjK);
+    if (c > 0) return { anchor: Math.abs(tjK - a.tjK) <= Math.abs(tjK - b.tjK) ? a : b, c, pair, hadPair: true };
+  }
+  return { anchor: nearest(perTemperature, tjK), c: LEAKAGE_RULES[family].c, hadPair: pair !== null };
 }
 
 // The loss model asks for IR of the same part at one VR and many temperatures: validate the points
@@ -145,17 +155,8 @@ export function leakageValue(points: readonly LeakagePoint[], vrV: number, tjK: 
   requirePositive('tjK', tjK);
   const perTemperature = pointsAtVoltage(points, vrV);
   if (perTemperature.length === 0) return Number.NaN;
-  const pair = pickPair(perTemperature, tjK);
-  if (pair) {
-    const [a, b] = pair;
-    const c = Math.log(b.irA / a.irA) / (b.tjK - a.tjK);
-    if (c > 0) {
-      const anchor = Math.abs(tjK - a.tjK) <= Math.abs(tjK - b.tjK) ? a : b;
-      return leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK);
-    }
-  }
-  const anchor = nearest(perTemperature, tjK);
-  return leakageAtTemperature(anchor.irA, anchor.tjK, LEAKAGE_RULES[family].c, tjK);
+  const { anchor, c } = fitAt(perTemperature, tjK, family);
+  return leakageAtTemperature(anchor.irA, anchor.tjK, c, tjK);
 }
 
 function groupByTemperature(points: readonly LeakagePoint[]): LeakagePoint[][] {
