@@ -1,77 +1,87 @@
 /**
- * Times the existing import path on a generated CSV, phase by phase, into bench/out/catalog-SIZE.sqlite:
- *   node --max-old-space-size=16384 dist/bench/import-benchmark.js 1m [--search-index deferred|per-row|none]
- * Phases: read + CSV parse, decode + validate (parseQuantity, zod), write (writeParts, one transaction,
- * every index and trigger). --search-index shows what the search index costs: `deferred` as shipped
- * (new rows indexed in one statement at the end), `per-row` by its triggers (writeParts called on
- * 150 parts at a time inside one transaction, below the bulk threshold), `none` without the index.
- * With --end-to-end it times importPartsFile as `headroom catalog import` runs it (conflict check and
- * import baselines included), without the phase split.
+ * Import of a generated CSV (bench/out/parts-SIZE.csv, from generate-catalog.js) into a new catalog:
+ *   node dist/bench/import-benchmark.js 10k 100k 1m [--runs 3] [--cli-runs 3] [--out FILE]
+ * Each run opens a fresh catalog and calls importPartsFile as `headroom catalog import` does, then
+ * closes it (the last connection folds the write-ahead log into the file), and prints each step's
+ * time (reading and writing rows, each index, the approval trail, the commit) and the peak memory of
+ * the process. Then `headroom catalog import` itself, from process start to exit, with its peak
+ * memory. Medians over the runs; load average before and after, the machine being shared.
  */
+import { spawn } from 'node:child_process';
 import { readFileSync, rmSync } from 'node:fs';
-import { readCsvRecords } from '../src/catalog/csv-format.js';
-import { decodePartCells } from '../src/catalog/part-cells.js';
-import { importPartsFile, openCatalog, writeParts } from '../src/catalog/index.js';
-import type { Part } from '../src/parts/index.js';
-import { catalogPath, csvPath, mb, readArgs } from './bench-paths.js';
+import { loadavg } from 'node:os';
+import { join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { importPartsFile, openCatalog } from '../src/catalog/index.js';
+import { csvPath, mb, median, outDirectory, readArgs } from './bench-paths.js';
 
 const { words, flags } = readArgs(process.argv.slice(2));
-const size = words[0] ?? '10k';
-const searchIndex = flags.get('search-index') ?? 'deferred';
-const target = flags.get('out') ?? catalogPath(size);
-const seconds = (ms: number) => (ms / 1000).toFixed(2);
+const runs = Number(flags.get('runs') ?? 3);
+const cliRuns = Number(flags.get('cli-runs') ?? 3);
+const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.js');
+const seconds = (ms: number) => (ms / 1000).toFixed(2).padStart(7);
+const load = () => loadavg().map((x) => x.toFixed(1)).join(' ');
 
-if (flags.has('end-to-end')) {
-  for (const suffix of ['', '-wal', '-shm']) rmSync(target + suffix, { force: true });
+function removeCatalog(path: string): void {
+  for (const suffix of ['', '-wal', '-shm']) rmSync(path + suffix, { force: true });
+}
+
+/** One import in this process; the steps in the order they ran, and the total. */
+function importOnce(size: string, target: string): { steps: [string, number][]; total: number; added: number } {
+  removeCatalog(target);
+  const steps: [string, number][] = [];
   const started = performance.now();
   const catalog = openCatalog(target);
-  const result = importPartsFile(catalog, csvPath(size), 'csv', { by: 'bench', at: '2026-01-01T00:00:00.000Z' });
-  catalog.db.pragma('wal_checkpoint(TRUNCATE)');
+  steps.push(['open catalog', performance.now() - started]);
+  const result = importPartsFile(catalog, csvPath(size), 'csv', { by: 'bench', at: '2026-01-01T00:00:00.000Z', trace: (step, ms) => steps.push([step, ms]) });
+  if (!result.ok) throw new Error(`import failed: ${JSON.stringify(result).slice(0, 400)}`);
+  const closing = performance.now();
   catalog.close();
-  const added = result.ok ? result.written.added : `failed: ${JSON.stringify(result.issues.slice(0, 2))}`;
-  console.log(`importPartsFile of ${size}: ${added} added in ${seconds(performance.now() - started)} s, peak rss ${mb(process.resourceUsage().maxRSS * 1024)} MB`);
-  process.exit(0);
+  steps.push(['close (write-ahead log into the file)', performance.now() - closing]);
+  return { steps, total: performance.now() - started, added: result.written.added };
 }
 
-const t0 = performance.now();
-const text = readFileSync(csvPath(size), 'utf8');
-const read = readCsvRecords(csvPath(size), text);
-const t1 = performance.now();
-const parts: Part[] = [];
-let bad = 0;
-for (const record of read.records) {
-  const decoded = decodePartCells(record.cells, { bareTemperatureUnit: 'K' });
-  if (decoded.ok) parts.push(decoded.part);
-  else if (bad++ < 3) console.error(`line ${record.line}:`, decoded.issues);
+/** `headroom catalog import` in a child process: wall time and the child's peak resident memory. */
+function cliOnce(size: string, target: string): Promise<{ ms: number; peakMb: number }> {
+  removeCatalog(target);
+  return new Promise((done, fail) => {
+    const started = performance.now();
+    const child = spawn(process.execPath, [cli, '--catalog', target, 'catalog', 'import', csvPath(size)], { env: { ...process.env, NO_COLOR: '1' }, stdio: ['ignore', 'ignore', 'pipe'] });
+    let stderr = '';
+    let peakKb = 0;
+    child.stderr.on('data', (d) => (stderr += d));
+    // VmHWM is the peak resident size so far (Linux); read it until the process ends.
+    const poll = setInterval(() => {
+      try {
+        peakKb = Number(/VmHWM:\s+(\d+)/.exec(readFileSync(`/proc/${child.pid}/status`, 'utf8'))?.[1] ?? peakKb);
+      } catch {
+        // The process has just exited.
+      }
+    }, 50);
+    child.on('close', (status) => {
+      clearInterval(poll);
+      if (status !== 0) fail(new Error(`headroom catalog import exited ${status}: ${stderr}`));
+      else done({ ms: performance.now() - started, peakMb: Math.round(peakKb / 1024) });
+    });
+  });
 }
-const t2 = performance.now();
 
-for (const suffix of ['', '-wal', '-shm']) rmSync(target + suffix, { force: true });
-const catalog = openCatalog(target);
-if (searchIndex === 'none') {
-  for (const t of ['part_search_ai', 'part_search_ad', 'part_search_au']) catalog.db.exec(`DROP TRIGGER ${t}`);
-  catalog.db.exec('DROP TABLE part_search_deferral; DROP TABLE part_search');
+for (const size of words.length > 0 ? words : ['10k', '100k', '1m']) {
+  const target = flags.get('out') ?? join(outDirectory(), `import-${size}.sqlite`);
+  console.log(`\nimport of ${csvPath(size)} (load average ${load()})`);
+  const all = Array.from({ length: runs }, () => importOnce(size, target));
+  const names = all[0]!.steps.map(([name]) => name);
+  for (const name of names) {
+    const times = all.map((r) => r.steps.find(([n]) => n === name)?.[1] ?? 0);
+    console.log(`  ${name.padEnd(44)} ${seconds(median(times))} s   (${times.map((t) => (t / 1000).toFixed(2)).join(', ')})`);
+  }
+  const totals = all.map((r) => r.total);
+  console.log(`  ${'total, importPartsFile in this process'.padEnd(44)} ${seconds(median(totals))} s   (${totals.map((t) => (t / 1000).toFixed(2)).join(', ')}); ${all[0]!.added} parts; peak rss ${mb(process.resourceUsage().maxRSS * 1024)} MB`);
+  const commands = [];
+  for (let i = 0; i < cliRuns; i++) commands.push(await cliOnce(size, target));
+  if (commands.length > 0) {
+    const ms = commands.map((c) => c.ms);
+    console.log(`  ${'headroom catalog import, start to exit'.padEnd(44)} ${seconds(median(ms))} s   (${ms.map((t) => (t / 1000).toFixed(2)).join(', ')}); peak rss ${Math.max(...commands.map((c) => c.peakMb))} MB`);
+  }
+  console.log(`  load average after: ${load()}`);
 }
-const t3 = performance.now();
-const context = { by: 'bench', reason: 'import benchmark', at: '2026-01-01T00:00:00.000Z' };
-const PER_ROW_CHUNK = 150;
-const summary =
-  searchIndex === 'per-row'
-    ? catalog.db.transaction(() => {
-        let added = 0;
-        for (let i = 0; i < parts.length; i += PER_ROW_CHUNK) added += writeParts(catalog, parts.slice(i, i + PER_ROW_CHUNK), context).added;
-        return { added };
-      })()
-    : writeParts(catalog, parts, context);
-const t4 = performance.now();
-const t4b = performance.now();
-catalog.db.pragma('wal_checkpoint(TRUNCATE)');
-catalog.close();
-const t5 = performance.now();
-
-console.log(`import of ${size}: ${read.records.length} records, ${bad} invalid, ${summary.added} added; search index: ${searchIndex}`);
-console.log(`  read + CSV parse      ${seconds(t1 - t0)} s`);
-console.log(`  decode + validate     ${seconds(t2 - t1)} s`);
-console.log(`  write (transaction)   ${seconds(t4 - t3)} s`);
-console.log(`  checkpoint + close    ${seconds(t5 - t4b)} s`);
-console.log(`  total                 ${seconds(t5 - t0)} s   peak rss ${mb(process.resourceUsage().maxRSS * 1024)} MB`);

@@ -62,12 +62,17 @@ export function changeApproval(catalog: Catalog, reference: string, change: Appr
 
 /** The whole trail of one part, oldest first. Entries are never changed or removed. */
 export function approvalHistory(catalog: Catalog, part: Pick<Part, 'manufacturer' | 'partNumber'>): ApprovalEvent[] {
+  // Entries written by a bulk import name their part's row (migration 006); the others its identity.
   const rows = catalog.db
     .prepare(
       `SELECT id, manufacturer, part_number, at, by, from_state, to_state, note, reason FROM approval_event
-       WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE ORDER BY id`,
+       WHERE part_id IN (SELECT id FROM part WHERE part_number = ? COLLATE NOCASE AND manufacturer = ? COLLATE NOCASE)
+       UNION ALL
+       SELECT id, manufacturer, part_number, at, by, from_state, to_state, note, reason FROM approval_event
+       WHERE part_id IS NULL AND part_number = ? COLLATE NOCASE AND manufacturer = ? COLLATE NOCASE
+       ORDER BY id`,
     )
-    .all(part.manufacturer, part.partNumber) as Record<string, string | number | null>[];
+    .all(part.partNumber, part.manufacturer, part.partNumber, part.manufacturer) as Record<string, string | number | null>[];
   return rows.map((r) => ({
     id: Number(r.id),
     manufacturer: String(r.manufacturer),

@@ -1,7 +1,8 @@
-import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
 import { PART_COLUMNS, type Part } from '../parts/index.js';
 import { encodePartCells } from './part-cells.js';
+import { cellCountIssue, checkCsvHeader, emptyFileIssue, unreadableIssue } from './import/csv-header.js';
+import { CsvTokenizer } from './import/csv-tokenizer.js';
 import type { RowIssue } from './row-issue.js';
 
 export interface SourceRecord {
@@ -19,45 +20,28 @@ export interface RecordsRead {
 
 /** Splits CSV text into records keyed by header, each with the line it starts on. */
 export function readCsvRecords(file: string, text: string): RecordsRead {
-  let parsed: { record: string[]; info: { lines: number }; raw: string }[];
-  try {
-    parsed = parse(text, { bom: true, info: true, raw: true, skip_empty_lines: true, relax_column_count: true }) as never;
-  } catch (error) {
-    const e = error as { message: string; lines?: number };
-    return { records: [], isUnreadable: true, issues: [{ file, line: e.lines ?? 0, column: '', value: '', message: `not readable as CSV: ${e.message}`, expected: 'comma-separated values with a header row (RFC 4180 quoting)' }] };
-  }
-  const [header, ...rows] = parsed;
-  if (!header) return { records: [], isUnreadable: true, issues: [{ file, line: 0, column: '', value: '', message: 'the file is empty', expected: 'a header row naming the columns' }] };
-  const columns = header.record.map((c) => c.trim());
+  const tokenizer = new CsvTokenizer();
+  const rows: { cells: string[]; line: number }[] = [];
+  const sink = (cells: readonly string[], count: number, line: number) => rows.push({ cells: cells.slice(0, count), line });
+  const problem = tokenizer.push(text, sink) ?? tokenizer.end(sink);
+  if (problem) return { records: [], isUnreadable: true, issues: [unreadableIssue(file, problem.line, problem.message)] };
+  const [header, ...data] = rows;
+  if (!header) return { records: [], isUnreadable: true, issues: [emptyFileIssue(file)] };
+  const columns = header.cells.map((c) => c.trim());
+  const headerIssues = checkCsvHeader(file, columns, header.line);
+  if (headerIssues.length > 0) return { records: [], issues: headerIssues, isUnreadable: true };
   const issues: RowIssue[] = [];
-  const headerLine = startLine(header);
-  const known = new Set(PART_COLUMNS);
-  columns.forEach((c, i) => {
-    if (!known.has(c)) issues.push({ file, line: headerLine, column: c, value: '', message: `unknown column ${i + 1}`, expected: `column names from docs/catalog-format.md: ${PART_COLUMNS.join(', ')}` });
-    else if (columns.indexOf(c) !== i) issues.push({ file, line: headerLine, column: c, value: '', message: 'column named twice', expected: 'each column once' });
-  });
-  for (const required of ['manufacturer', 'part_number', 'kind', 'package']) {
-    if (!columns.includes(required)) issues.push({ file, line: headerLine, column: required, value: '', message: 'required column missing from the header', expected: 'a header with manufacturer, part_number, kind and package at least' });
-  }
-  if (issues.length > 0) return { records: [], issues, isUnreadable: true };
   const records: SourceRecord[] = [];
-  for (const row of rows) {
-    const line = startLine(row);
-    if (row.record.length !== columns.length) {
-      issues.push({ file, line, column: '', value: '', message: `${row.record.length} cells where the header has ${columns.length}`, expected: 'one cell per header column (quote cells that contain commas)' });
+  for (const row of data) {
+    if (row.cells.length !== columns.length) {
+      issues.push(cellCountIssue(file, row.line, row.cells.length, columns.length));
       continue;
     }
     const cells: Record<string, string> = {};
-    columns.forEach((c, i) => (cells[c] = row.record[i]!));
-    records.push({ line, cells });
+    columns.forEach((c, i) => (cells[c] = row.cells[i]!));
+    records.push({ line: row.line, cells });
   }
   return { records, issues };
-}
-
-/** csv-parse reports the line a record ends on; count back over its own line breaks. */
-function startLine(row: { info: { lines: number }; raw: string }): number {
-  const body = row.raw.replace(/^(\r?\n)+/, '').replace(/\r?\n$/, '');
-  return row.info.lines - (body.match(/\n/g)?.length ?? 0);
 }
 
 /** A spreadsheet runs a cell starting with these as a formula; an apostrophe makes it text. */

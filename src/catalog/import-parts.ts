@@ -1,12 +1,16 @@
-import { readFileSync } from 'node:fs';
-import { findImportConflicts, recordBaselines, type ImportConflict } from './import-conflicts.js';
+import { readFileSync, statSync } from 'node:fs';
+import type { ImportConflict } from './import-conflicts.js';
+import { PartWriter, type ConflictResolution } from './import/part-writer.js';
+import { readJsonText } from './import/read-json-text.js';
+import { readCsvText } from './import/read-csv-file.js';
+import type { ReadSummary, RowBatch } from './import/row-collector.js';
+import { feedCsvFile } from './import/row-feed.js';
 import type { Catalog } from './open-catalog.js';
-import { readPartsText, type PartFileFormat } from './part-file.js';
-import { writeParts, type WriteSummary } from './part-repository.js';
+import type { PartFileFormat } from './part-file.js';
+import type { WriteSummary } from './part-repository.js';
 import type { RowIssue } from './row-issue.js';
 
-/** What to do with parts changed both here and in the file. */
-export type ConflictResolution = 'report' | 'keep-local' | 'overwrite-local';
+export type { ConflictResolution };
 
 export interface ImportOptions {
   /** Write the good records and report the bad ones, instead of writing nothing. */
@@ -15,6 +19,8 @@ export interface ImportOptions {
   readonly onConflict?: ConflictResolution;
   readonly by: string;
   readonly at?: string;
+  /** Told how long each step took: reading and writing, each index, the commit (bench/import-benchmark.ts). */
+  readonly trace?: (step: string, ms: number) => void;
 }
 
 export type ImportResult =
@@ -23,38 +29,48 @@ export type ImportResult =
   | { ok: false; records: number; issues: []; conflicts: ImportConflict[] };
 
 /**
- * Validates the whole file first; then, in one write transaction, checks for parts changed here
- * since they were last imported and writes. With one bad record (and no skipInvalid) or an
- * unresolved conflict, the catalog is not touched at all.
+ * Fewest bytes a row of an export takes (44 columns, the four required ones filled), to tell from
+ * a file's size how many rows it may hold before reading it: the writer's choice of path.
  */
-export function importPartsText(catalog: Catalog, file: string, text: string, format: PartFileFormat, options: ImportOptions): ImportResult {
-  const reading = readPartsText(file, text, format);
-  if (reading.issues.length > 0 && (!options.skipInvalid || reading.isUnreadable)) {
-    return { ok: false, records: reading.records, issues: reading.issues };
-  }
-  const at = options.at ?? new Date().toISOString();
-  const resolution = options.onConflict ?? 'report';
-  const run = catalog.db.transaction(() => {
-    const conflicts = findImportConflicts(catalog, reading.parts);
-    if (conflicts.length > 0 && resolution === 'report') return { written: undefined, conflicts };
-    const keep = new Set(resolution === 'keep-local' ? conflicts.map((c) => `${c.manufacturer}\u0000${c.partNumber}`.toLowerCase()) : []);
-    const parts = reading.parts.map((p) => p.part).filter((p) => !keep.has(`${p.manufacturer}\u0000${p.partNumber}`.toLowerCase()));
-    const written = writeParts(catalog, parts, { by: options.by, reason: `import of ${file}`, at });
-    recordBaselines(catalog, parts, file, at);
-    return { written, conflicts };
+const MIN_BYTES_PER_ROW = 100;
+
+type Read = (onBatch: (batch: RowBatch) => void) => ReadSummary;
+
+/**
+ * Reads, checks and writes in one pass inside one write transaction (src/catalog/import/). With
+ * one bad record (and no skipInvalid), an unreadable file or an unresolved conflict, the
+ * transaction is rolled back and the catalog is not touched at all; every problem is reported.
+ */
+function runImport(catalog: Catalog, file: string, bytes: number, read: Read, options: ImportOptions): ImportResult {
+  const writer = new PartWriter(catalog, {
+    by: options.by,
+    at: options.at ?? new Date().toISOString(),
+    reason: `import of ${file}`,
+    onConflict: options.onConflict ?? 'report',
+    skipInvalid: options.skipInvalid === true,
+    expectedRows: Math.floor(bytes / MIN_BYTES_PER_ROW),
+    ...(options.trace ? { trace: options.trace } : {}),
   });
-  const outcome = run.immediate();
-  if (outcome.written === undefined) return { ok: false, records: reading.records, issues: [], conflicts: outcome.conflicts };
-  return {
-    ok: true,
-    records: reading.records,
-    written: outcome.written,
-    skipped: reading.issues,
-    keptLocal: resolution === 'keep-local' ? outcome.conflicts : [],
-    overwritten: resolution === 'overwrite-local' ? outcome.conflicts : [],
-  };
+  let summary: ReadSummary;
+  const started = performance.now();
+  try {
+    summary = read((batch) => writer.write(batch));
+  } catch (error) {
+    writer.abort();
+    throw error;
+  }
+  options.trace?.('read and write rows', performance.now() - started);
+  options.trace?.('  of which writing rows', writer.writeMs);
+  if (summary.readMs !== undefined) options.trace?.('  reading and checking (worker thread)', summary.readMs);
+  return { ...writer.finish(summary), records: summary.records };
+}
+
+export function importPartsText(catalog: Catalog, file: string, text: string, format: PartFileFormat, options: ImportOptions): ImportResult {
+  const read: Read = (onBatch) => (format === 'csv' ? readCsvText(text, file, onBatch) : readJsonText(text, file, onBatch));
+  return runImport(catalog, file, text.length, read, options);
 }
 
 export function importPartsFile(catalog: Catalog, path: string, format: PartFileFormat, options: ImportOptions): ImportResult {
-  return importPartsText(catalog, path, readFileSync(path, 'utf8'), format, options);
+  const read: Read = (onBatch) => (format === 'csv' ? feedCsvFile(path, path, onBatch) : readJsonText(readFileSync(path, 'utf8'), path, onBatch));
+  return runImport(catalog, path, statSync(path).size, read, options);
 }

@@ -89,6 +89,10 @@ export function openCatalog(path: string, options: OpenOptions = {}): Catalog {
       }
       return { db, path, migrated: [], close: () => db.close() };
     }
+    // A new file gets 16 KiB pages: a million-part import writes a third fewer pages (and log
+    // frames) than with SQLite's 4 KiB, and builds its indexes quicker (bench/README.md). The size
+    // is fixed once the file has pages, so existing catalogs keep theirs.
+    if (!isMemory && (db.pragma('page_count', { simple: true }) as number) === 0) db.pragma('page_size = 16384');
     if (!isMemory) db.pragma('journal_mode = WAL');
     db.pragma('synchronous = NORMAL');
     // Every write to a table with triggers (part, for search) keeps a statement journal; in a

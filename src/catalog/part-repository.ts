@@ -4,6 +4,7 @@ import { CatalogError } from './catalog-error.js';
 import type { Catalog } from './open-catalog.js';
 import { ROW_COLUMNS, comparePartIdentity, partToRow, rowToPart, type PartRow } from './part-rows.js';
 import { deferSearchIndex } from './search/bulk-index.js';
+import { searchKey } from '../selection/query/search-text.js';
 
 export interface WriteSummary {
   readonly added: number;
@@ -20,8 +21,9 @@ export interface WriteContext {
   readonly at?: string;
 }
 
-const INSERT_SQL = `INSERT INTO part (${ROW_COLUMNS.join(', ')}, updated_at)
-  VALUES (${ROW_COLUMNS.map((c) => '@' + c).join(', ')}, @updated_at)`;
+// The search key is stored by the writer (migration 006): the triggers that would fill it stay idle.
+const INSERT_SQL = `INSERT INTO part (${ROW_COLUMNS.join(', ')}, search_key, updated_at)
+  VALUES (${ROW_COLUMNS.map((c) => '@' + c).join(', ')}, @search_key, @updated_at)`;
 const UPDATE_SQL = `UPDATE part SET ${ROW_COLUMNS.map((c) => `${c} = @${c}`).join(', ')}, updated_at = @updated_at WHERE id = @id`;
 const SELECT_IDENTITY_SQL = `SELECT id, ${ROW_COLUMNS.join(', ')} FROM part
   WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE`;
@@ -53,7 +55,7 @@ export function writeParts(catalog: Catalog, parts: readonly Part[], context: Wr
       const row = partToRow(part);
       const existing = select.get(part.manufacturer, part.partNumber) as (PartRow & { id: number }) | undefined;
       if (!existing) {
-        insert.run({ ...row, updated_at: at });
+        insert.run({ ...row, search_key: searchKey(part.partNumber), updated_at: at });
         event.run(part.manufacturer, part.partNumber, at, context.by, null, part.approval, part.approvalNote ?? null, context.reason);
         added++;
       } else if (sameRow(existing, row)) {

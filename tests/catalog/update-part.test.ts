@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { approvalHistory, findPart, openCatalog, writeParts } from '../../src/catalog/index.js';
 import { updatePart } from '../../src/catalog/update-part.js';
+import { keyTrigrams } from '../../src/catalog/search/word-sql.js';
 import { aPart } from '../helpers/a-part.js';
 
 const AT = '2026-04-01T00:00:00.000Z';
@@ -52,7 +53,7 @@ describe('editing a stored part', () => {
     expect(r.ok).toBe(true);
     expect(rowId(catalog, 'TW-SK340AX')).toBe(id);
     expect(rowId(catalog, 'TW-SK340A')).toBeUndefined();
-    const hits = catalog.db.prepare("SELECT rowid FROM part_search WHERE part_search MATCH '\"SK340AX\"'").all();
+    const hits = catalog.db.prepare('SELECT rowid FROM part_search WHERE part_search MATCH ?').all(keyTrigrams('SK340AX'));
     expect(hits).toEqual([{ rowid: id }]);
   });
 

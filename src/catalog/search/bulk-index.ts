@@ -6,7 +6,7 @@ const BULK_MIN_PARTS = 200;
 
 /**
  * Call inside a write transaction that adds many parts; call the function it returns before
- * the transaction ends. Meanwhile the search triggers skip the new rows (migration 004), and
+ * the transaction ends. Meanwhile the search triggers skip the new rows (migrations 004, 006), and
  * the returned function indexes them all in one statement. If the transaction rolls back, so
  * does the deferral. Nested calls, small writes and catalogs without the table do nothing.
  */
@@ -17,7 +17,7 @@ export function deferSearchIndex(db: BetterSqlite3.Database, partCount: number):
   const afterId = db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
   db.prepare('INSERT INTO part_search_deferral (after_id) VALUES (?)').run(afterId);
   return () => {
-    db.prepare('INSERT INTO part_search (rowid, key, text) SELECT id, search_key, search_text FROM part WHERE id > ?').run(afterId);
+    db.prepare('INSERT INTO part_search (rowid, key) SELECT id, search_key FROM part WHERE id > ?').run(afterId);
     db.prepare('DELETE FROM part_search_deferral').run();
   };
 }

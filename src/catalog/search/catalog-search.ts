@@ -1,9 +1,9 @@
 import type { Catalog } from '../open-catalog.js';
-import { matchesWords, parseQuery, type QueryWord, type SearchQuery } from '../../selection/query/index.js';
+import { matchesWords, parseQuery, squash, type QueryWord, type SearchQuery } from '../../selection/query/index.js';
 import { slipCandidates, filterScan, prefixScan, substringScan } from './candidate-queries.js';
 import { filtersToSql } from './filter-sql.js';
 import { partLoader } from './load-parts.js';
-import { makerMatcher } from './maker-names.js';
+import { fieldWords } from './field-words.js';
 import { isFuzzyWorthTrying, rankExact, rankFuzzy, type RankItem, type Ranked } from './rank-results.js';
 import { DEFAULT_LIMIT, type SearchHit, type SearchOptions, type SearchOutcome } from './search-result.js';
 import { statementCache } from './statement-cache.js';
@@ -23,7 +23,8 @@ function dedupe(items: readonly RankItem[]): RankItem[] {
 
 export function createCatalogSearch(catalog: Catalog): CatalogSearch {
   const prepare = statementCache(catalog.db);
-  const makers = makerMatcher(catalog.db);
+  const fields = fieldWords(catalog.db);
+  const makers = (text: string) => fields.values('manufacturer').filter((name) => squash(name).toLowerCase().includes(text));
   const load = partLoader(catalog.db);
 
   /** Exact matches, fewest steps first; `isComplete` when no step was cut short by its limit. */
@@ -33,16 +34,16 @@ export function createCatalogSearch(catalog: Catalog): CatalogSearch {
     const words: readonly QueryWord[] = query.words;
     const keep = (items: RankItem[]) => items.filter((i) => matchesWords(i, words));
     if (!words.some((w) => !w.isNegated)) {
-      const found = filterScan(prepare, where, words, shortlist);
-      return { ranked: rankExact(keep(found), words), isComplete: found.length < shortlist };
+      const found = filterScan(prepare, where, words, fields, shortlist);
+      return { ranked: rankExact(keep(found.items), words), isComplete: !found.isCut };
     }
-    const byPrefix = prefixScan(prepare, where, words, shortlist);
-    const prefixHits = keep(byPrefix);
+    const byPrefix = prefixScan(prepare, where, words, fields, shortlist);
+    const prefixHits = keep(byPrefix.items);
     // Part-number starts outrank every other exact match, so enough of them settle the answer.
     if (prefixHits.length >= limit) return { ranked: rankExact(prefixHits, words), isComplete: false };
-    const bySubstring = substringScan(prepare, where, words, shortlist);
-    const isComplete = byPrefix.length < shortlist && bySubstring.length < shortlist;
-    return { ranked: rankExact(keep(dedupe([...byPrefix, ...bySubstring])), words), isComplete };
+    const bySubstring = substringScan(prepare, where, words, fields, shortlist);
+    const isComplete = !byPrefix.isCut && !bySubstring.isCut;
+    return { ranked: rankExact(keep(dedupe([...byPrefix.items, ...bySubstring.items])), words), isComplete };
   }
 
   return (queryText, options = {}) => {
@@ -56,7 +57,7 @@ export function createCatalogSearch(catalog: Catalog): CatalogSearch {
     if (ranked.length === 0 && isFuzzyWorthTrying(parsed.query.words)) {
       const where = filtersToSql(parsed.query.filters, makers);
       const negated = parsed.query.words.filter((w) => w.isNegated);
-      const candidates = slipCandidates(prepare, where, parsed.query.words).filter((i) => matchesWords(i, negated));
+      const candidates = slipCandidates(prepare, where, parsed.query.words, fields).filter((i) => matchesWords(i, negated));
       top = rankFuzzy(candidates, parsed.query.words).slice(0, limit);
       matched = 'fuzzy';
     }

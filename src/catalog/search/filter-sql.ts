@@ -45,9 +45,9 @@ function condition(f: QueryFilter, makersMatching: (text: string) => readonly st
     case 'group':
       return { sql: `p.second_source_group COLLATE NOCASE IN (${placeholders(f.values.length)})`, params: f.values };
     case 'maker': {
+      // The names as stored (field-words.ts), so an exact comparison finds every spelling.
       const names = [...new Set(f.values.flatMap(makersMatching))];
-      // NOCASE lets the planner walk part_identity instead of reading every row.
-      return names.length === 0 ? { sql: '0', params: [] } : { sql: `p.manufacturer COLLATE NOCASE IN (${placeholders(names.length)})`, params: names };
+      return names.length === 0 ? { sql: '0', params: [] } : { sql: `p.manufacturer IN (${placeholders(names.length)})`, params: names };
     }
   }
 }
@@ -62,9 +62,4 @@ export function filtersToSql(filters: readonly QueryFilter[], makersMatching: (t
     params.push(...c.params);
   }
   return { sql: sql.length > 0 ? sql.join(' AND ') : '1', params };
-}
-
-/** An FTS5 query for the words: each one a phrase of trigrams, all required. */
-export function ftsPhrases(texts: readonly string[], joiner: 'AND' | 'OR' = 'AND'): string {
-  return texts.map((t) => `"${t.replace(/"/g, '""')}"`).join(` ${joiner} `);
 }

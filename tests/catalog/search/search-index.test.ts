@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { loadMigrations, migrate, openCatalog, writeParts, type Catalog } from '../../../src/catalog/index.js';
 import { searchParts } from '../../../src/catalog/search/index.js';
 import type { Part } from '../../../src/parts/index.js';
+import { ROW_COLUMNS, partToRow } from '../../../src/catalog/part-rows.js';
 import { aPart } from '../../helpers/a-part.js';
 import { fixtureCatalog, fixtureParts } from './search-fixture.js';
 
@@ -50,13 +51,19 @@ describe('keeping the search index current', () => {
   });
 });
 
-describe('migration 004', () => {
-  it('indexes parts written before it', () => {
+/** Parts as a program of schema version 3 to 5 wrote them: the part columns, nothing derived. */
+function writeOlder(db: Database.Database, parts: readonly Part[]): void {
+  const insert = db.prepare(`INSERT INTO part (${ROW_COLUMNS.join(', ')}, updated_at) VALUES (${ROW_COLUMNS.map(() => '?').join(', ')}, 'x')`);
+  for (const part of parts) insert.run(ROW_COLUMNS.map((c) => partToRow(part)[c] ?? null));
+}
+
+describe('migrations 004 and 006', () => {
+  it.each([3, 5])('index parts written at version %i', (version) => {
     const db = new Database(':memory:');
-    migrate(db, loadMigrations(), 3);
+    migrate(db, loadMigrations(), version);
     const older: Catalog = { db, path: ':memory:', migrated: [], close: () => db.close() };
-    writeParts(older, fixtureParts(), context);
-    expect(migrate(db)).toContain(4);
+    writeOlder(db, fixtureParts());
+    expect(migrate(db)).toContain(6);
     expect(numbers(older, 'ktr1a1000l')).toEqual(['KTR-1A1000-L']);
     expect(numbers(older, 'automotive')).toEqual(['AG-SK100-S']);
     checkIndex(older);
