@@ -7,6 +7,8 @@ import { useTempDir } from '../helpers/temp-dir.js';
 const tempDir = useTempDir();
 const earlier = Array.from({ length: latestSchemaVersion() - 1 }, (_, i) => i + 1);
 
+const BASELINE = 'a'.repeat(64);
+
 /** A catalog as a program of schema version `v` would have written it, with data in every table it had. */
 function catalogAtVersion(path: string, v: number): void {
   const db = new Database(path);
@@ -29,6 +31,7 @@ function catalogAtVersion(path: string, v: number): void {
       tj: { marginBelowMaxK: 30, source: 'house rule' },
     };
     db.prepare("INSERT INTO derating_policy (id, body, updated_at, updated_by) VALUES ('old-rules', ?, '2025-06-01', 'ce')").run(JSON.stringify(policy));
+    db.prepare("INSERT INTO import_baseline (manufacturer, part_number, row_digest, source, imported_at) VALUES ('oldtime devices', 'ot-600', ?, 'team.csv', '2025-06-01')").run(BASELINE);
   }
   db.close();
 }
@@ -47,6 +50,15 @@ describe('upgrading a catalog of every earlier schema version', () => {
       expect(approvalHistory(catalog, part!).map((e) => e.reason)).toEqual(['first review']);
     }
     if (v >= 3) expect(listTeamPolicies(catalog).map((p) => p.id)).toEqual(['old-rules']);
+    // Migration 006: the import baseline moves into the part row; the key and the word index are filled.
+    expect(catalog.db.prepare('SELECT import_digest, search_key FROM part').get()).toEqual({ import_digest: v >= 3 ? BASELINE : null, search_key: 'OT600' });
+    expect(catalog.db.prepare('SELECT field, value FROM part_field_value ORDER BY field').all()).toEqual([
+      { field: 'description', value: `kept since v${v}` },
+      { field: 'kind', value: 'rectifier' },
+      { field: 'manufacturer', value: 'Oldtime Devices' },
+      { field: 'package', value: 'DO-41' },
+    ]);
+    catalog.db.exec("INSERT INTO part_search (part_search, rank) VALUES ('integrity-check', 1)");
     expect(checkCatalog(catalog).isHealthy).toBe(true);
     catalog.close();
     const backup = new Database(`${path}.before-v${latestSchemaVersion()}.bak`, { readonly: true });

@@ -6,6 +6,7 @@ import type { WriteSummary } from '../part-repository.js';
 import type { RowIssue } from '../row-issue.js';
 import { addFieldValues } from './field-values.js';
 import { judgeIncoming, storedPartOf, type StoredPart } from './import-conflicts-check.js';
+import { shapeRowDigest } from './row-digest.js';
 import { deferSearchIndex } from '../search/bulk-index.js';
 import { deferredRebuild, type SchemaRebuild } from './schema-rebuild.js';
 import type { ReadSummary, RowBatch, RowGroup } from './row-collector.js';
@@ -154,6 +155,9 @@ export class PartWriter {
     const columns = this.shapes[group.shape]!;
     const width = columns.length;
     const rows = group.lines.length;
+    // The rows' baselines (row-values.ts): each row's digest slot, computed here.
+    const digestSlot = columns.indexOf(DIGEST_AT);
+    for (let r = 0, offset = 0; r < rows; r++, offset += width) group.values[offset + digestSlot] = shapeRowDigest(columns, group.values, offset, ROW_COLUMNS.length);
     if (this.stored !== undefined && this.conflicts.length === 0 && !this.matchesStored(group, columns)) {
       // Only new parts (always so in an empty catalog): the whole group in one statement.
       this.insertStatement(group.shape, rows).run(group.values);

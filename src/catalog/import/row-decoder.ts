@@ -16,7 +16,6 @@ import {
   requiredNumbers,
   type NumberRule,
 } from './part-rules.js';
-import { rowDigest } from './row-digest.js';
 import { TextTable } from './text-table.js';
 import { WRITE_COLUMNS, writeValuesOf, type SqlValue } from './row-values.js';
 
@@ -79,15 +78,15 @@ function numberReader(field: PartField): Reader {
 interface Points {
   readonly json: string;
   readonly count: number;
-  /** The middle value of each point (VR of reverse points), for the cross-checks. */
-  readonly middle: number[];
+  /** The middle value of each point as the cross-checks read reverse points' VR. */
+  readonly middle: { readonly vrV: number }[];
 }
 
 function pointsReader(kinds: readonly [QuantityKind, QuantityKind, QuantityKind], names: readonly [string, string, string], rules: readonly NumberRule[]): Reader {
   const keys = names.map((n) => `"${n}":`);
   return (text): Points | typeof DEFER => {
     const parts: string[] = [];
-    const middle: number[] = [];
+    const middle: { vrV: number }[] = [];
     for (const rawTerm of text.split(';')) {
       const term = rawTerm.trim();
       if (term === '') continue;
@@ -98,7 +97,7 @@ function pointsReader(kinds: readonly [QuantityKind, QuantityKind, QuantityKind]
         const n = quantity(values[j]!.trim(), kinds[j]!);
         if (n === DEFER || !Number.isFinite(n) || !meetsRule(rules[j]!, n)) return DEFER;
         json += (j > 0 ? ',' : '') + keys[j] + String(n);
-        if (j === 1) middle.push(n);
+        if (j === 1) middle.push({ vrV: n });
       }
       parts.push(json + '}');
     }
@@ -204,6 +203,10 @@ const I = {
   irPoints: at('irPoints'),
 };
 const CHECKED_KEYS = ['vrrmV', 'ifAvA', 'ifsmA', 'vrwmV', 'vbrMinV', 'vbrMaxV', 'vcV', 'pppmRiseS', 'pppmDecayS'] as const;
+const CHECKED_AT = CHECKED_KEYS.map(at);
+/** Positions of the ratings each kind must give. */
+const REQUIRED_AT = new Map([...KINDS].map((kind) => [kind, requiredNumbers(kind as PartKind).map(at)]));
+const NO_POINTS: readonly { vrV: number }[] = [];
 
 /** Cells keyed by column, as decodePartCells takes them. */
 function cellsByColumn(columns: readonly string[], cells: readonly string[], count: number): Record<string, string> {
@@ -252,7 +255,7 @@ export function compileRowDecoder(columns: readonly string[]): (cells: readonly 
     const kind = values[I.kind] as PartKind | null;
     const defer = () => decodeByReference(cellsByColumn(columns, cells, readers.length));
     if (kind === null || !KINDS.has(kind) || values[I.manufacturer] === null || values[I.partNumber] === null || values[I.package] === null) return defer();
-    for (const key of requiredNumbers(kind)) if (values[KEY_AT.get(key)!] === null) return defer();
+    for (const i of REQUIRED_AT.get(kind)!) if (values[i] === null) return defer();
     if (isRectifying(kind) && (vf === undefined || vf.count === 0)) return defer();
     values[I.lifecycle] ??= 'active';
     values[I.approval] ??= 'pending';
@@ -264,12 +267,12 @@ export function compileRowDecoder(columns: readonly string[]): (cells: readonly 
       approvalNote: values[I.approvalNote] ?? undefined,
       unitPrice: values[I.unitPrice] ?? undefined,
       currency: values[I.currency] ?? undefined,
-      irPoints: (ir?.middle ?? []).map((vrV) => ({ vrV })),
+      irPoints: ir?.middle ?? NO_POINTS,
     };
-    for (const key of CHECKED_KEYS) checked[key] = values[KEY_AT.get(key)!] ?? undefined;
+    for (let k = 0; k < CHECKED_KEYS.length; k++) checked[CHECKED_KEYS[k]!] = values[CHECKED_AT[k]!] ?? undefined;
     if (checkPartConsistency(checked as never).length > 0) return defer();
     values[rowWidth] = searchKey(values[I.partNumber] as string);
-    values[rowWidth + 1] = rowDigest(values, rowWidth);
+    values[rowWidth + 1] = 0; // the digest: the writer fills it in
     return { ok: true, values };
   };
 }

@@ -23,11 +23,27 @@ function finish(h: number): number {
 
 /** Hash of the first `count` values, a non-negative integer below 2^53. */
 export function rowDigest(values: readonly SqlValue[], count = values.length): number {
+  return digestOf(count, (i) => values[i] ?? null);
+}
+
+/**
+ * The same for one row of a shape group (row-collector.ts): the row's filled columns, ascending,
+ * are `columns`, their values `values[offset …]`; every other column is NULL.
+ */
+export function shapeRowDigest(columns: readonly number[], values: readonly SqlValue[], offset: number, count: number): number {
+  let k = 0;
+  return digestOf(count, (i) => {
+    if (columns[k] !== i) return null;
+    return values[offset + k++]!;
+  });
+}
+
+function digestOf(count: number, valueAt: (i: number) => SqlValue): number {
   let a = 0x811c9dc5;
   let b = 0x2545f491;
   for (let i = 0; i < count; i++) {
-    const v = values[i];
-    if (v === null || v === undefined) {
+    const v = valueAt(i);
+    if (v === null) {
       a = Math.imul(a ^ 0x7f4a7c15, 0x01000193);
       b = Math.imul(b ^ i, 0x5bd1e995);
     } else if (typeof v === 'number') {

@@ -30,7 +30,7 @@ function ours(text: string, pieces: readonly number[] = [text.length]): Read {
  */
 function reference(text: string): Read {
   try {
-    const rows = parse(text, { bom: true, info: true, raw: true, skip_empty_lines: true, relax_column_count: true }) as { record: string[]; info: { lines: number }; raw: string }[];
+    const rows = parse(text, { bom: true, info: true, raw: true, skip_empty_lines: true, relax_column_count: true }) as unknown as { record: string[]; info: { lines: number }; raw: string }[];
     return {
       records: rows.map((r) => {
         const body = r.raw.replace(/^(\r?\n)+/, '').replace(/\r?\n$/, '');
