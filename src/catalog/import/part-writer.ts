@@ -45,6 +45,8 @@ export type WriteOutcome =
 const BULK_MIN_ROWS = 20_000;
 // Parts read into memory to check the file's rows against, on the bulk path.
 const BULK_MAX_EXISTING = 200_000;
+// Rows the bulk path adds to the full-text index at a time.
+const SEARCH_INDEX_ROWS = 250_000;
 
 const EVENT_SQL = `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason, part_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`;
 const STORED_SQL = `SELECT id, ${ROW_COLUMNS.join(', ')}, import_digest FROM part`;
@@ -130,25 +132,32 @@ export class PartWriter {
     if (this.rebuild) this.indexNewRows();
   }
 
-  /** Last row id whose full-text entry and trail entry are written (bulk path). */
-  private indexedUpTo = 0;
+  /** Last row ids whose trail entry and full-text entry are written (bulk path). */
+  private trailUpTo = 0;
+  private searchUpTo = 0;
 
   /**
-   * The bulk path's full-text and trail entries for the rows added since the last call, in row
-   * order: both grow at their ends, and doing it batch by batch uses the time this thread would
-   * otherwise wait for the reader.
+   * The bulk path's trail and full-text entries for the rows added so far, in row order (both
+   * grow at their ends), while the reader works on. The trail takes every batch; the full-text
+   * index a quarter million rows at a time, because FTS5 starts a segment at every statement and
+   * merging hundreds of them cost more than the inserts (bench/README.md, import).
    */
-  private indexNewRows(): void {
-    const from = Math.max(this.indexedUpTo, this.maxIdBefore);
+  private indexNewRows(isLast = false): void {
     const to = this.db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
-    if (to <= from) return;
-    this.statement('INSERT INTO part_search (rowid, key) SELECT id, search_key FROM part WHERE id > ? AND id <= ?').run(from, to);
-    // Each entry names its part's row: the trail's part_id index grows at its end (migration 006).
-    this.statement(
-      `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason, part_id)
-       SELECT manufacturer, part_number, ?, ?, NULL, approval, approval_note, ?, id FROM part WHERE id > ? AND id <= ? ORDER BY id`,
-    ).run(this.options.at, this.options.by, this.options.reason, from, to);
-    this.indexedUpTo = to;
+    const trailFrom = Math.max(this.trailUpTo, this.maxIdBefore);
+    if (to > trailFrom) {
+      // Each entry names its part's row: the trail's part_id index grows at its end (migration 006).
+      this.statement(
+        `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason, part_id)
+         SELECT manufacturer, part_number, ?, ?, NULL, approval, approval_note, ?, id FROM part WHERE id > ? AND id <= ? ORDER BY id`,
+      ).run(this.options.at, this.options.by, this.options.reason, trailFrom, to);
+      this.trailUpTo = to;
+    }
+    const searchFrom = Math.max(this.searchUpTo, this.maxIdBefore);
+    if (to > searchFrom && (isLast || to - searchFrom >= SEARCH_INDEX_ROWS)) {
+      this.statement('INSERT INTO part_search (rowid, key) SELECT id, search_key FROM part WHERE id > ? AND id <= ?').run(searchFrom, to);
+      this.searchUpTo = to;
+    }
   }
 
   private writeGroup(group: RowGroup): void {
@@ -270,6 +279,8 @@ export class PartWriter {
           this.rebuild.restoreIndexes([name]);
           step(`index ${name}`);
         }
+        this.indexNewRows(true);
+        step('full-text index (last rows)');
         addFieldValues(this.db, summary.fieldValues);
         this.rebuild.restoreTriggers();
         step('field values, triggers');
