@@ -1,13 +1,12 @@
 /**
  * Writes synthetic catalogs as CSV files in bench/out/ (never committed):
  *   node dist/bench/generate-catalog.js 10k 100k 1m [--seed 42]
- * With --sqlite it also writes bench/out/catalog-SIZE.sqlite straight through writeParts
- * (no CSV parse or validation), the quick way to a catalog for the search benchmark.
+ * With --sqlite it also imports each into bench/out/catalog-SIZE.sqlite (importPartsFile, as
+ * `headroom catalog import` does), the catalog the search benchmark reads.
  */
-import { closeSync, openSync, writeSync } from 'node:fs';
-import { rmSync } from 'node:fs';
+import { closeSync, openSync, rmSync, writeSync } from 'node:fs';
 import { writeCsv } from '../src/catalog/csv-format.js';
-import { openCatalog, writeParts } from '../src/catalog/index.js';
+import { importPartsFile, openCatalog } from '../src/catalog/index.js';
 import type { Part } from '../src/parts/index.js';
 import { catalogPath, csvPath, readArgs, seededRandom, sizeOf } from './bench-paths.js';
 import { syntheticParts } from './synthetic-parts.js';
@@ -19,9 +18,6 @@ function writeCatalog(size: string, seed: number, isSqlite: boolean): void {
   const path = csvPath(size);
   const started = performance.now();
   const fd = openSync(path, 'w');
-  const target = catalogPath(size);
-  if (isSqlite) for (const suffix of ['', '-wal', '-shm']) rmSync(target + suffix, { force: true });
-  const catalog = isSqlite ? openCatalog(target) : undefined;
   let chunk: Part[] = [];
   let isFirst = true;
   // Chunks keep memory flat; only the first keeps its header row.
@@ -29,7 +25,6 @@ function writeCatalog(size: string, seed: number, isSqlite: boolean): void {
     const text = writeCsv(chunk);
     writeSync(fd, isFirst ? text : text.slice(text.indexOf('\n') + 1));
     isFirst = false;
-    if (catalog) writeParts(catalog, chunk, { by: 'bench', reason: 'generated', at: '2026-01-01T00:00:00.000Z' });
     chunk = [];
   };
   for (const part of syntheticParts(count, seededRandom(seed))) {
@@ -38,9 +33,16 @@ function writeCatalog(size: string, seed: number, isSqlite: boolean): void {
   }
   if (chunk.length > 0) flush();
   closeSync(fd);
-  catalog?.db.pragma('wal_checkpoint(TRUNCATE)');
-  catalog?.close();
-  const also = catalog ? ` and ${target}` : '';
+  let also = '';
+  if (isSqlite) {
+    const target = catalogPath(size);
+    for (const suffix of ['', '-wal', '-shm']) rmSync(target + suffix, { force: true });
+    const catalog = openCatalog(target);
+    const result = importPartsFile(catalog, path, 'csv', { by: 'bench', at: '2026-01-01T00:00:00.000Z' });
+    catalog.close();
+    if (!result.ok) throw new Error(`import of ${path} failed`);
+    also = ` and ${target}`;
+  }
   console.log(`${path}${also}: ${count} parts in ${((performance.now() - started) / 1000).toFixed(1)} s`);
 }
 
