@@ -40,9 +40,9 @@ export function readCsvFile(path: string, file: string, onBatch: (batch: RowBatc
   return collector.end();
 }
 
-/** The same for text already in memory. */
+/** The same for text already in memory, a megabyte at a time so batches go out as they fill. */
 export function readCsvText(text: string, file: string, onBatch: (batch: RowBatch) => void): ReadSummary {
   const collector = new RowCollector(file, onBatch);
-  collector.push(text);
+  for (let at = 0; at < text.length; at += CHUNK_BYTES) collector.push(text.slice(at, at + CHUNK_BYTES));
   return collector.end();
 }
