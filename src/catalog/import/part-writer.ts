@@ -1,25 +1,18 @@
 import type BetterSqlite3 from 'better-sqlite3';
 import type { ImportConflict } from '../import-conflicts.js';
 import type { Catalog } from '../open-catalog.js';
-import { ROW_COLUMNS, type PartRow } from '../part-rows.js';
+import { ROW_COLUMNS } from '../part-rows.js';
 import type { WriteSummary } from '../part-repository.js';
 import type { RowIssue } from '../row-issue.js';
-import { addFieldValues } from './field-values.js';
-import { judgeIncoming, storedPartOf, type StoredPart } from './import-conflicts-check.js';
-import { shapeRowDigest } from './row-digest.js';
 import { deferSearchIndex } from '../search/bulk-index.js';
-import { deferredRebuild, type SchemaRebuild } from './schema-rebuild.js';
+import { BulkAdditions } from './bulk-additions.js';
+import { addFieldValues } from './field-values.js';
+import { judgeIncoming, type StoredPart } from './import-conflicts-check.js';
 import type { ReadSummary, RowBatch, RowGroup } from './row-collector.js';
-import {
-  APPROVAL_AT,
-  APPROVAL_NOTE_AT,
-  DIGEST_AT,
-  MANUFACTURER_AT,
-  PART_NUMBER_AT,
-  WRITE_COLUMNS,
-  identityOf,
-  type SqlValue,
-} from './row-values.js';
+import { shapeRowDigest } from './row-digest.js';
+import { APPROVAL_AT, APPROVAL_NOTE_AT, DIGEST_AT, MANUFACTURER_AT, PART_NUMBER_AT, WRITE_COLUMNS, identityOf, type SqlValue } from './row-values.js';
+import { deferredRebuild, type SchemaRebuild } from './schema-rebuild.js';
+import { WriteStatements } from './write-statements.js';
 
 export type ConflictResolution = 'report' | 'keep-local' | 'overwrite-local';
 
@@ -40,18 +33,18 @@ export type WriteOutcome =
   | { ok: false; issues: RowIssue[] }
   | { ok: false; issues: []; conflicts: ImportConflict[] };
 
-// Below this many rows the indexes are kept up row by row; above it, if the catalog holds no more
-// parts than the file, they are dropped and built again once (bench/README.md, import).
+// Below this many rows the indexes are kept up row by row; above it, if the catalog holds few parts
+// beside the file, they are dropped and built again once (bench/README.md, import).
 const BULK_MIN_ROWS = 20_000;
 // Parts read into memory to check the file's rows against, on the bulk path.
 const BULK_MAX_EXISTING = 200_000;
-// Rows the bulk path adds to the full-text index at a time.
-const SEARCH_INDEX_ROWS = 250_000;
 
-const EVENT_SQL = `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason, part_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`;
-const STORED_SQL = `SELECT id, ${ROW_COLUMNS.join(', ')}, import_digest FROM part`;
-
-const sqlText = (s: string) => `'${s.replace(/'/g, "''")}'`;
+/** The bulk path: indexes and triggers dropped until finish(), the catalog's few parts held here. */
+interface Bulk {
+  readonly rebuild: SchemaRebuild;
+  readonly stored: Map<string, StoredPart>;
+  readonly additions: BulkAdditions;
+}
 
 /**
  * Writes an import's rows as they are read, inside one write transaction: other connections see
@@ -61,8 +54,8 @@ const sqlText = (s: string) => `'${s.replace(/'/g, "''")}'`;
  */
 export class PartWriter {
   private readonly db: BetterSqlite3.Database;
+  private readonly statements: WriteStatements;
   private readonly shapes: number[][] = [];
-  private readonly statements = new Map<string, BetterSqlite3.Statement>();
   private readonly issues: RowIssue[] = [];
   private readonly conflicts: ImportConflict[] = [];
   private readonly keptLocal: ImportConflict[] = [];
@@ -72,34 +65,26 @@ export class PartWriter {
   private unchanged = 0;
   private isStopped = false;
   private isOpen = true;
-  private readonly maxIdBefore: number;
-  /** Bulk path: indexes and triggers dropped until finish(); the catalog's parts held here. */
-  private readonly rebuild: SchemaRebuild | undefined;
-  private readonly stored: Map<string, StoredPart> | undefined;
-  private readonly finishSearchIndex: () => void;
-  private readonly find: BetterSqlite3.Statement;
-  private readonly event: BetterSqlite3.Statement;
+  private readonly bulk: Bulk | undefined;
+  private readonly finishSearchIndex: () => void = () => {};
+  /** Time spent in write(), for the benchmark's phase figures. */
+  writeMs = 0;
 
   constructor(
     catalog: Catalog,
     private readonly options: WriterOptions,
   ) {
     this.db = catalog.db;
+    this.statements = new WriteStatements(this.db, options.at);
     this.db.exec('BEGIN IMMEDIATE');
     try {
-      this.maxIdBefore = this.db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
+      const maxIdBefore = this.db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
       const existing = this.db.prepare('SELECT count(*) FROM part').pluck().get() as number;
       // expectedRows overestimates about twofold: bulk when the catalog is small beside the file.
-      const isBulk = options.expectedRows >= BULK_MIN_ROWS && existing <= Math.min(options.expectedRows / 4, BULK_MAX_EXISTING);
-      this.find = this.db.prepare(`${STORED_SQL} WHERE part_number = ? COLLATE NOCASE AND manufacturer = ? COLLATE NOCASE`);
-      this.event = this.db.prepare(EVENT_SQL);
-      if (isBulk) {
-        this.stored = new Map();
-        for (const row of this.db.prepare(STORED_SQL).iterate() as Iterable<PartRow & { id: number; import_digest: string | number | null }>) {
-          this.stored.set(identityOf(String(row.manufacturer), String(row.part_number)), storedPartOf(row));
-        }
-        this.rebuild = deferredRebuild(this.db);
-        this.finishSearchIndex = () => {};
+      if (options.expectedRows >= BULK_MIN_ROWS && existing <= Math.min(options.expectedRows / 4, BULK_MAX_EXISTING)) {
+        const stored = new Map<string, StoredPart>();
+        for (const part of this.statements.all()) stored.set(identityOf(String(part.values[MANUFACTURER_AT]), String(part.values[PART_NUMBER_AT])), part);
+        this.bulk = { rebuild: deferredRebuild(this.db), stored, additions: new BulkAdditions(this.db, this.statements, maxIdBefore, options) };
       } else {
         this.finishSearchIndex = deferSearchIndex(this.db, Number.MAX_SAFE_INTEGER);
       }
@@ -109,54 +94,19 @@ export class PartWriter {
     }
   }
 
-  /** Time spent in write(), for the benchmark's phase figures. */
-  writeMs = 0;
-
   write(batch: RowBatch): void {
     const started = performance.now();
     try {
-      this.writeBatch(batch);
+      for (const columns of batch.newShapes) this.shapes.push(columns);
+      if (batch.issues.length > 0) {
+        this.issues.push(...batch.issues);
+        if (!this.options.skipInvalid) this.isStopped = true;
+      }
+      if (this.isStopped) return;
+      for (const group of batch.groups) this.writeGroup(group);
+      this.bulk?.additions.add();
     } finally {
       this.writeMs += performance.now() - started;
-    }
-  }
-
-  private writeBatch(batch: RowBatch): void {
-    for (const columns of batch.newShapes) this.shapes.push(columns);
-    if (batch.issues.length > 0) {
-      this.issues.push(...batch.issues);
-      if (!this.options.skipInvalid) this.isStopped = true;
-    }
-    if (this.isStopped) return;
-    for (const group of batch.groups) this.writeGroup(group);
-    if (this.rebuild) this.indexNewRows();
-  }
-
-  /** Last row ids whose trail entry and full-text entry are written (bulk path). */
-  private trailUpTo = 0;
-  private searchUpTo = 0;
-
-  /**
-   * The bulk path's trail and full-text entries for the rows added so far, in row order (both
-   * grow at their ends), while the reader works on. The trail takes every batch; the full-text
-   * index a quarter million rows at a time, because FTS5 starts a segment at every statement and
-   * merging hundreds of them cost more than the inserts (bench/README.md, import).
-   */
-  private indexNewRows(isLast = false): void {
-    const to = this.db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
-    const trailFrom = Math.max(this.trailUpTo, this.maxIdBefore);
-    if (to > trailFrom) {
-      // Each entry names its part's row: the trail's part_id index grows at its end (migration 006).
-      this.statement(
-        `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason, part_id)
-         SELECT manufacturer, part_number, ?, ?, NULL, approval, approval_note, ?, id FROM part WHERE id > ? AND id <= ? ORDER BY id`,
-      ).run(this.options.at, this.options.by, this.options.reason, trailFrom, to);
-      this.trailUpTo = to;
-    }
-    const searchFrom = Math.max(this.searchUpTo, this.maxIdBefore);
-    if (to > searchFrom && (isLast || to - searchFrom >= SEARCH_INDEX_ROWS)) {
-      this.statement('INSERT INTO part_search (rowid, key) SELECT id, search_key FROM part WHERE id > ? AND id <= ?').run(searchFrom, to);
-      this.searchUpTo = to;
     }
   }
 
@@ -167,97 +117,65 @@ export class PartWriter {
     // The rows' baselines (row-values.ts): each row's digest slot, computed here.
     const digestSlot = columns.indexOf(DIGEST_AT);
     for (let r = 0, offset = 0; r < rows; r++, offset += width) group.values[offset + digestSlot] = shapeRowDigest(columns, group.values, offset, ROW_COLUMNS.length);
-    if (this.stored !== undefined && this.conflicts.length === 0 && !this.matchesStored(group, columns)) {
+    if (this.bulk && this.conflicts.length === 0 && !this.matchesStored(group, columns)) {
       // Only new parts (always so in an empty catalog): the whole group in one statement.
-      this.insertStatement(group.shape, rows).run(group.values);
+      this.statements.insert(columns, rows).run(group.values);
       this.added += rows;
       return;
     }
     for (let r = 0; r < rows && !this.isStopped; r++) {
       const values: SqlValue[] = new Array<SqlValue>(WRITE_COLUMNS.length).fill(null);
       for (let k = 0; k < width; k++) values[columns[k]!] = group.values[r * width + k]!;
-      this.writeRow(values, group.lines[r]!, group.shape, group.values.slice(r * width, (r + 1) * width));
+      this.writeRow(values, group.lines[r]!, columns, group.values.slice(r * width, (r + 1) * width));
     }
   }
 
   private matchesStored(group: RowGroup, columns: readonly number[]): boolean {
-    if (this.stored!.size === 0) return false;
+    if (this.bulk!.stored.size === 0) return false;
     const m = columns.indexOf(MANUFACTURER_AT);
     const p = columns.indexOf(PART_NUMBER_AT);
     for (let r = 0, at = 0; r < group.lines.length; r++, at += columns.length) {
-      if (this.stored!.has(identityOf(group.values[at + m] as string, group.values[at + p] as string))) return true;
+      if (this.bulk!.stored.has(identityOf(group.values[at + m] as string, group.values[at + p] as string))) return true;
     }
     return false;
   }
 
-  private writeRow(values: SqlValue[], line: number, shape: number, shapeValues: SqlValue[]): void {
+  private writeRow(values: SqlValue[], line: number, columns: readonly number[], shapeValues: SqlValue[]): void {
     const manufacturer = values[MANUFACTURER_AT] as string;
     const partNumber = values[PART_NUMBER_AT] as string;
-    const stored = this.stored ? this.stored.get(identityOf(manufacturer, partNumber)) : this.lookUp(manufacturer, partNumber);
+    const stored = this.bulk ? this.bulk.stored.get(identityOf(manufacturer, partNumber)) : this.statements.find(manufacturer, partNumber);
     // After a conflict to report nothing is written; the rest of the file is still checked for more.
     const isWriting = this.conflicts.length === 0;
     if (!stored) {
       if (!isWriting) return;
-      const { lastInsertRowid } = this.insertStatement(shape, 1).run(shapeValues);
-      if (!this.rebuild) this.event.run(manufacturer, partNumber, this.options.at, this.options.by, null, values[APPROVAL_AT], values[APPROVAL_NOTE_AT], this.options.reason, lastInsertRowid);
+      const { lastInsertRowid } = this.statements.insert(columns, 1).run(shapeValues);
+      // The bulk path writes its trail entries batch by batch (bulk-additions.ts).
+      if (!this.bulk) this.event(values, null, lastInsertRowid);
       this.added++;
       return;
     }
     const verdict = judgeIncoming(stored, values);
     if (verdict === 'conflict') {
       const conflict: ImportConflict = { manufacturer, partNumber, isLocalOnly: stored.baseline === null, line };
-      if (this.options.onConflict === 'report') {
-        this.conflicts.push(conflict);
-        return;
-      }
-      if (this.options.onConflict === 'keep-local') {
-        this.keptLocal.push(conflict);
-        return;
-      }
+      if (this.options.onConflict === 'report') return void this.conflicts.push(conflict);
+      if (this.options.onConflict === 'keep-local') return void this.keptLocal.push(conflict);
       this.overwritten.push(conflict);
     }
     if (!isWriting) return;
     if (verdict === 'unchanged') {
       this.unchanged++;
-      if (stored.baseline !== values[DIGEST_AT]) this.statement('UPDATE part SET import_digest = ? WHERE id = ?').run(values[DIGEST_AT], stored.id);
+      if (stored.baseline !== values[DIGEST_AT]) this.statements.get('UPDATE part SET import_digest = ? WHERE id = ?').run(values[DIGEST_AT], stored.id);
       return;
     }
-    this.update(stored, values);
+    this.statements.update(stored, values, values[DIGEST_AT]!);
+    const approval = stored.values[APPROVAL_AT];
+    if (approval !== values[APPROVAL_AT] || (stored.values[APPROVAL_NOTE_AT] ?? null) !== (values[APPROVAL_NOTE_AT] ?? null)) this.event(values, approval ?? null, stored.id);
     this.updated++;
   }
 
-  private lookUp(manufacturer: string, partNumber: string): StoredPart | undefined {
-    const row = this.find.get(partNumber, manufacturer) as (PartRow & { id: number; import_digest: string | number | null }) | undefined;
-    return row ? storedPartOf(row) : undefined;
-  }
-
-  private update(stored: StoredPart, values: SqlValue[]): void {
-    // The part number only when its letter case changed: naming it wakes the key triggers.
-    const columns = ROW_COLUMNS.filter((c, i) => i !== PART_NUMBER_AT || stored.values[i] !== values[i]);
-    const sql = `UPDATE part SET ${columns.map((c) => `${c} = ?`).join(', ')}, updated_at = ?, import_digest = ? WHERE id = ?`;
-    this.statement(sql).run(...columns.map((c) => values[ROW_COLUMNS.indexOf(c)]), this.options.at, values[DIGEST_AT], stored.id);
-    const approval = stored.values[APPROVAL_AT];
-    if (approval !== values[APPROVAL_AT] || (stored.values[APPROVAL_NOTE_AT] ?? null) !== (values[APPROVAL_NOTE_AT] ?? null)) {
-      this.event.run(values[MANUFACTURER_AT], values[PART_NUMBER_AT], this.options.at, this.options.by, approval, values[APPROVAL_AT], values[APPROVAL_NOTE_AT], this.options.reason, stored.id);
-    }
-  }
-
-  private statement(sql: string): BetterSqlite3.Statement {
-    let s = this.statements.get(sql);
-    if (!s) this.statements.set(sql, (s = this.db.prepare(sql)));
-    return s;
-  }
-
-  private insertStatement(shape: number, rows: number): BetterSqlite3.Statement {
-    const key = `${shape}:${rows}`;
-    let s = this.statements.get(key);
-    if (!s) {
-      const columns = this.shapes[shape]!.map((c) => WRITE_COLUMNS[c]!);
-      const one = `(${columns.map(() => '?').join(', ')}, ${sqlText(this.options.at)})`;
-      s = this.db.prepare(`INSERT INTO part (${columns.join(', ')}, updated_at) VALUES ${Array.from({ length: rows }, () => one).join(', ')}`);
-      this.statements.set(key, s);
-    }
-    return s;
+  private event(values: readonly SqlValue[], from: SqlValue, partId: number | bigint): void {
+    const { at, by, reason } = this.options;
+    this.statements.event().run(values[MANUFACTURER_AT], values[PART_NUMBER_AT], at, by, from, values[APPROVAL_AT], values[APPROVAL_NOTE_AT], reason, partId);
   }
 
   /** Commits what was written, or rolls it all back and says why. */
@@ -273,16 +191,17 @@ export class PartWriter {
     }
     const step = stepTimer(this.options.trace);
     try {
-      if (this.rebuild) {
+      if (this.bulk) {
+        const { rebuild, additions } = this.bulk;
         // part_identity first: creating it is also the last check that no part came twice.
-        for (const name of ['part_identity', ...this.rebuild.pendingIndexes().filter((n) => n !== 'part_identity')]) {
-          this.rebuild.restoreIndexes([name]);
+        for (const name of ['part_identity', ...rebuild.pendingIndexes().filter((n) => n !== 'part_identity')]) {
+          rebuild.restoreIndexes([name]);
           step(`index ${name}`);
         }
-        this.indexNewRows(true);
+        additions.add(true);
         step('full-text index (last rows)');
         addFieldValues(this.db, summary.fieldValues);
-        this.rebuild.restoreTriggers();
+        rebuild.restoreTriggers();
         step('field values, triggers');
       } else {
         this.finishSearchIndex();
