@@ -1,6 +1,7 @@
 import { describeKind, parseQuantity, type QuantityKind } from '../units/index.js';
 import { PART_FIELDS, fieldByColumn, type IrPoint, type Part, type PartField, type VfPoint } from '../parts/index.js';
 import { partSchema } from '../parts/part-schema.js';
+import { plainSchemaWording } from '../parts/schema-wording.js';
 
 /** One problem with one cell of outside input; the caller adds the file and line. */
 export interface CellIssue {
@@ -115,7 +116,7 @@ export function decodePartCells(
     if (decoded.ok) input[field.key] = decoded.value;
     else issues.push({ column, value: String(raw), message: decoded.message, expected: expectedFor(field) });
   }
-  const parsed = partSchema.safeParse(input);
+  const parsed = partSchema.safeParse(input, { error: plainSchemaWording });
   if (!parsed.success) {
     const seen = new Set(issues.map((i) => i.column));
     for (const zi of parsed.error.issues) {
@@ -137,10 +138,8 @@ export function decodePartCells(
   return { ok: true, part: parsed.data! };
 }
 
-function zodMessage(issue: { code: string; message: string; path: PropertyKey[] }, key: string): string {
-  if (key === 'kind' && issue.code === 'invalid_union') return 'missing or unknown kind';
-  const where = issue.path.length > 1 ? ` (point ${Number(issue.path[1]) + 1})` : '';
-  return issue.message + where;
+function zodMessage(issue: { code: string; message: string }, key: string): string {
+  return key === 'kind' && issue.code === 'invalid_union' ? 'missing or unknown kind' : issue.message;
 }
 
 /** Undo the apostrophe our CSV export puts before cells a spreadsheet would run as formulas. */

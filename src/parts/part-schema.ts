@@ -18,14 +18,16 @@ const missingIsRequired = {
   error: (issue: { input?: unknown }) =>
     issue.input === undefined ? 'required for this kind of part' : undefined,
 };
+const VF_REQUIRED = 'at least one VF point is required for this kind of part';
 const num = (isRequired: boolean) => z.number(isRequired ? missingIsRequired : undefined);
 const positive = (max: number, isRequired = false) => num(isRequired).positive().max(max);
 const kelvin = (isRequired = false) => num(isRequired).min(KELVIN_MIN).max(KELVIN_MAX);
 // C0/C1 control characters would corrupt terminals and keys.
 const CONTROL = /[\u0000-\u001f\u007f-\u009f]/;
 
+// Only the type error: a too-long name keeps its own message rather than reading "must be text".
 const identityText = z
-  .string({ error: (issue) => (issue.input === undefined ? 'required' : 'must be text') })
+  .string({ error: (issue) => (issue.code !== 'invalid_type' ? undefined : issue.input === undefined ? 'required' : 'must be text') })
   .trim()
   .min(1, 'must not be empty')
   .max(120)
@@ -103,7 +105,10 @@ export const rectifyingPartSchema = z.object({
   vrrmV: positive(100_000, true),
   ifAvA: positive(100_000, true),
   tjMaxK: kelvin(true),
-  vfPoints: z.array(vfPointSchema).min(1, 'at least one VF point is required for this kind of part'),
+  // Missing (an empty cell) and an empty list are the same to the person filling it in.
+  vfPoints: z
+    .array(vfPointSchema, { error: (issue) => (issue.input === undefined ? VF_REQUIRED : undefined) })
+    .min(1, VF_REQUIRED),
 });
 
 /** Zener parts work in breakdown: voltage, tolerance, test current and power. */

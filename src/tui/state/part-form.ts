@@ -71,7 +71,5 @@ export function shownPartIssue(check: PartCheck, column: string, values: Readonl
   const issue = check.issues.get(column);
   if (!issue) return undefined;
   const isEmpty = (values[column] ?? '').trim() === '';
-  if (!hasAttempted && isEmpty) return undefined;
-  // A missing list (VF points) reads as a type error from the schema; to a person it is missing.
-  return isEmpty && issue.message.startsWith('Invalid input') ? { ...issue, message: 'required for this kind of part' } : issue;
+  return !hasAttempted && isEmpty ? undefined : issue;
 }
