@@ -5,15 +5,12 @@
  * Built by importing the generator's CSV (bench/out/parts-SIZE.csv, written here when missing),
  * the quickest way to a catalog (bench/README.md, import).
  */
-import { closeSync, existsSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { existsSync, renameSync } from 'node:fs';
 import { join } from 'node:path';
-import { writeCsv } from '../../src/catalog/csv-format.js';
-import { importPartsFile, openCatalog } from '../../src/catalog/index.js';
-import type { Part } from '../../src/parts/index.js';
-import { csvPath, outDirectory, seededRandom, sizeOf } from '../bench-paths.js';
-import { syntheticParts } from '../synthetic-parts.js';
+import { openCatalog } from '../../src/catalog/index.js';
+import { csvPath, outDirectory, sizeOf } from '../bench-paths.js';
+import { importCatalog, writeSyntheticCsv } from '../synthetic-catalog.js';
 
-const CHUNK = 10_000;
 const SEED = 42;
 
 export function pickCatalogPath(size: string): string {
@@ -25,21 +22,7 @@ function ensureCsv(size: string): string {
   const path = csvPath(size);
   if (existsSync(path)) return path;
   const temp = `${path}.writing`;
-  const fd = openSync(temp, 'w');
-  let chunk: Part[] = [];
-  let isFirst = true;
-  const flush = () => {
-    const text = writeCsv(chunk);
-    writeSync(fd, isFirst ? text : text.slice(text.indexOf('\n') + 1));
-    isFirst = false;
-    chunk = [];
-  };
-  for (const part of syntheticParts(sizeOf(size), seededRandom(SEED))) {
-    chunk.push(part);
-    if (chunk.length === CHUNK) flush();
-  }
-  if (chunk.length > 0) flush();
-  closeSync(fd);
+  writeSyntheticCsv(temp, sizeOf(size), SEED);
   renameSync(temp, path);
   return path;
 }
@@ -59,19 +42,12 @@ export function ensurePickCatalog(size: string, log: (line: string) => void = ()
   const target = pickCatalogPath(size);
   if (existsSync(target) && isUsable(target)) return target;
   const temp = `${target}.building`;
-  for (const suffix of ['', '-wal', '-shm']) rmSync(temp + suffix, { force: true });
   const started = performance.now();
-  const csv = ensureCsv(size);
-  const catalog = openCatalog(temp);
-  try {
-    const result = importPartsFile(catalog, csv, 'csv', { by: 'bench', at: '2026-01-01T00:00:00.000Z' });
-    if (!result.ok) throw new Error(`pick catalog: import of ${csv} failed`);
-    log(`  ${result.written.added} parts imported (${((performance.now() - started) / 1000).toFixed(0)} s)`);
+  importCatalog(ensureCsv(size), temp, (catalog, added) => {
+    log(`  ${added} parts imported (${((performance.now() - started) / 1000).toFixed(0)} s)`);
     catalog.db.pragma('optimize');
     catalog.db.pragma('journal_mode = DELETE');
-  } finally {
-    catalog.close();
-  }
+  });
   renameSync(temp, target);
   return target;
 }
