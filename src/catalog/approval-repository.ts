@@ -2,6 +2,7 @@ import { APPROVAL_STATES, type ApprovalState, type Part } from '../parts/index.j
 import { CatalogError } from './catalog-error.js';
 import type { Catalog } from './open-catalog.js';
 import { findPart } from './part-repository.js';
+import { IDENTITY_WHERE, identityParams } from './identity-sql.js';
 
 export interface ApprovalEvent {
   readonly id: number;
@@ -42,12 +43,11 @@ export function changeApproval(catalog: Catalog, reference: string, change: Appr
   const run = db.transaction(() => {
     const before = findPart(catalog, reference);
     const note = change.state === 'conditional' ? change.condition!.trim() : null;
-    db.prepare('UPDATE part SET approval = ?, approval_note = ?, updated_at = ? WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE').run(
+    db.prepare(`UPDATE part SET approval = ?, approval_note = ?, updated_at = ? WHERE ${IDENTITY_WHERE}`).run(
       change.state,
       note,
       at,
-      before.manufacturer,
-      before.partNumber,
+      ...identityParams(before.manufacturer, before.partNumber),
     );
     const info = db
       .prepare('INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason) VALUES (?, ?, ?, ?, ?, ?, ?, ?)')
@@ -66,13 +66,13 @@ export function approvalHistory(catalog: Catalog, part: Pick<Part, 'manufacturer
   const rows = catalog.db
     .prepare(
       `SELECT id, manufacturer, part_number, at, by, from_state, to_state, note, reason FROM approval_event
-       WHERE part_id IN (SELECT id FROM part WHERE part_number = ? COLLATE NOCASE AND manufacturer = ? COLLATE NOCASE)
+       WHERE part_id IN (SELECT id FROM part WHERE ${IDENTITY_WHERE})
        UNION ALL
        SELECT id, manufacturer, part_number, at, by, from_state, to_state, note, reason FROM approval_event
        WHERE part_id IS NULL AND part_number = ? COLLATE NOCASE AND manufacturer = ? COLLATE NOCASE
        ORDER BY id`,
     )
-    .all(part.partNumber, part.manufacturer, part.partNumber, part.manufacturer) as Record<string, string | number | null>[];
+    .all(...identityParams(part.manufacturer, part.partNumber), part.partNumber, part.manufacturer) as Record<string, string | number | null>[];
   return rows.map((r) => ({
     id: Number(r.id),
     manufacturer: String(r.manufacturer),

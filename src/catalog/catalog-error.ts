@@ -8,7 +8,8 @@ export type CatalogErrorCode =
   | 'unknown-part'
   | 'ambiguous-part'
   | 'invalid-change'
-  | 'unknown-group';
+  | 'unknown-group'
+  | 'busy';
 
 export class CatalogError extends Error {
   constructor(

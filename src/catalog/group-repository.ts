@@ -3,6 +3,7 @@ import { CatalogError } from './catalog-error.js';
 import type { Catalog } from './open-catalog.js';
 import { findPart } from './part-repository.js';
 import { ROW_COLUMNS, comparePartIdentity, rowToPart, type PartRow } from './part-rows.js';
+import { IDENTITY_WHERE, identityParams } from './identity-sql.js';
 
 export interface SecondSourceGroup {
   readonly name: string;
@@ -51,11 +52,11 @@ export function declareGroup(catalog: Catalog, name: string, references: readonl
   }
   const moved = parts.filter((p) => p.secondSourceGroup && p.secondSourceGroup !== groupName);
   const update = catalog.db.prepare(
-    'UPDATE part SET second_source_group = ?, updated_at = ? WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE',
+    `UPDATE part SET second_source_group = ?, updated_at = ? WHERE ${IDENTITY_WHERE}`,
   );
   const at = new Date().toISOString();
   catalog.db.transaction(() => {
-    for (const p of parts) update.run(groupName, at, p.manufacturer, p.partNumber);
+    for (const p of parts) update.run(groupName, at, ...identityParams(p.manufacturer, p.partNumber));
   }).immediate();
   return { group: findGroup(catalog, groupName), moved };
 }
@@ -65,14 +66,14 @@ export function leaveGroup(catalog: Catalog, reference: string): { part: Part; d
   const part = findPart(catalog, reference);
   if (!part.secondSourceGroup) throw new CatalogError('invalid-change', `${part.partNumber} is in no second-source group`, 'see `headroom catalog groups`');
   const name = part.secondSourceGroup;
-  const clear = catalog.db.prepare('UPDATE part SET second_source_group = NULL, updated_at = ? WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE');
+  const clear = catalog.db.prepare(`UPDATE part SET second_source_group = NULL, updated_at = ? WHERE ${IDENTITY_WHERE}`);
   const at = new Date().toISOString();
   let dissolved: string | undefined;
   catalog.db.transaction(() => {
-    clear.run(at, part.manufacturer, part.partNumber);
+    clear.run(at, ...identityParams(part.manufacturer, part.partNumber));
     const rest = catalog.db.prepare('SELECT manufacturer, part_number FROM part WHERE second_source_group = ?').all(name) as { manufacturer: string; part_number: string }[];
     if (rest.length === 1) {
-      clear.run(at, rest[0]!.manufacturer, rest[0]!.part_number);
+      clear.run(at, ...identityParams(rest[0]!.manufacturer, rest[0]!.part_number));
       dissolved = name;
     }
   }).immediate();

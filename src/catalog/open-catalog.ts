@@ -57,6 +57,25 @@ function checkIdentity(db: BetterSqlite3.Database, path: string): void {
   if (version > latestSchemaVersion()) throw tooNew(path, version);
 }
 
+/**
+ * Sets the write-ahead log, waiting like any other lock while a bulk import holds the catalog in
+ * its rollback journal (import/rollback-journal.ts): SQLite answers a journal change at once with
+ * "busy" instead of waiting itself.
+ */
+function useWriteAheadLog(db: BetterSqlite3.Database): void {
+  const deadline = Date.now() + BUSY_TIMEOUT_MS;
+  for (;;) {
+    try {
+      if (String(db.pragma('journal_mode = WAL', { simple: true })).toLowerCase() === 'wal') return;
+    } catch (error) {
+      if ((error as { code?: string }).code !== 'SQLITE_BUSY') throw error;
+    }
+    if (Date.now() >= deadline) throw new CatalogError('busy', `${db.name} is locked by a long write (an import?)`, 'try again when it has finished');
+    Atomics.wait(PAUSE, 0, 0, 25);
+  }
+}
+const PAUSE = new Int32Array(new SharedArrayBuffer(4));
+
 function tooNew(path: string, version: number): CatalogError {
   return new CatalogError(
     'too-new',
@@ -93,7 +112,7 @@ export function openCatalog(path: string, options: OpenOptions = {}): Catalog {
     // frames) than with SQLite's 4 KiB, and builds its indexes quicker (bench/README.md). The size
     // is fixed once the file has pages, so existing catalogs keep theirs.
     if (!isMemory && (db.pragma('page_count', { simple: true }) as number) === 0) db.pragma('page_size = 16384');
-    if (!isMemory) db.pragma('journal_mode = WAL');
+    if (!isMemory) useWriteAheadLog(db);
     db.pragma('synchronous = NORMAL');
     // Every write to a table with triggers (part, for search) keeps a statement journal; in a
     // temporary file that costs about a quarter of a large import (bench/README.md).

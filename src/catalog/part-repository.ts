@@ -5,6 +5,7 @@ import type { Catalog } from './open-catalog.js';
 import { ROW_COLUMNS, comparePartIdentity, partToRow, rowToPart, type PartRow } from './part-rows.js';
 import { deferSearchIndex } from './search/bulk-index.js';
 import { searchKey } from '../selection/query/search-text.js';
+import { IDENTITY_WHERE, NUMBER_WHERE, identityParams, numberParams } from './identity-sql.js';
 
 export interface WriteSummary {
   readonly added: number;
@@ -25,8 +26,7 @@ export interface WriteContext {
 const INSERT_SQL = `INSERT INTO part (${ROW_COLUMNS.join(', ')}, search_key, updated_at)
   VALUES (${ROW_COLUMNS.map((c) => '@' + c).join(', ')}, @search_key, @updated_at)`;
 const UPDATE_SQL = `UPDATE part SET ${ROW_COLUMNS.map((c) => `${c} = @${c}`).join(', ')}, updated_at = @updated_at WHERE id = @id`;
-const SELECT_IDENTITY_SQL = `SELECT id, ${ROW_COLUMNS.join(', ')} FROM part
-  WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE`;
+const SELECT_IDENTITY_SQL = `SELECT id, ${ROW_COLUMNS.join(', ')} FROM part WHERE ${IDENTITY_WHERE}`;
 const EVENT_SQL = `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason)
   VALUES (?, ?, ?, ?, ?, ?, ?, ?)`;
 
@@ -53,7 +53,7 @@ export function writeParts(catalog: Catalog, parts: readonly Part[], context: Wr
     let unchanged = 0;
     for (const part of parts) {
       const row = partToRow(part);
-      const existing = select.get(part.manufacturer, part.partNumber) as (PartRow & { id: number }) | undefined;
+      const existing = select.get(...identityParams(part.manufacturer, part.partNumber)) as (PartRow & { id: number }) | undefined;
       if (!existing) {
         insert.run({ ...row, search_key: searchKey(part.partNumber), updated_at: at });
         event.run(part.manufacturer, part.partNumber, at, context.by, null, part.approval, part.approvalNote ?? null, context.reason);
@@ -115,8 +115,8 @@ function lookupStatements(db: BetterSqlite3.Database) {
   let found = LOOKUPS.get(db);
   if (!found) {
     found = {
-      byIdentity: db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE`),
-      byNumber: db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE part_number = ? COLLATE NOCASE`),
+      byIdentity: db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE ${IDENTITY_WHERE}`),
+      byNumber: db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE ${NUMBER_WHERE}`),
     };
     LOOKUPS.set(db, found);
   }
@@ -128,8 +128,8 @@ export function findPart(catalog: Catalog, reference: string): Part {
   const colon = text.indexOf(':');
   const statements = lookupStatements(catalog.db);
   const rows = (colon > 0
-    ? statements.byIdentity.all(text.slice(0, colon).trim(), text.slice(colon + 1).trim())
-    : statements.byNumber.all(text)) as PartRow[];
+    ? statements.byIdentity.all(...identityParams(text.slice(0, colon).trim(), text.slice(colon + 1).trim()))
+    : statements.byNumber.all(...numberParams(text))) as PartRow[];
   if (rows.length === 0) {
     throw new CatalogError('unknown-part', `no part "${text}" in ${catalog.path}`, 'list parts with `headroom catalog list`');
   }

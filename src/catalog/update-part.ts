@@ -2,6 +2,7 @@ import type { Part } from '../parts/index.js';
 import type { Catalog } from './open-catalog.js';
 import type { WriteContext } from './part-repository.js';
 import { ROW_COLUMNS, partToRow, rowToPart, type PartRow } from './part-rows.js';
+import { IDENTITY_WHERE, identityParams } from './identity-sql.js';
 
 export type PartUpdate =
   | {
@@ -15,10 +16,8 @@ export type PartUpdate =
     }
   | { readonly ok: false; readonly code: 'unknown-part' | 'duplicate-part'; readonly message: string };
 
-const SELECT_BY_IDENTITY = `SELECT id, ${ROW_COLUMNS.join(', ')} FROM part
-  WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE`;
-const OTHER_WITH_IDENTITY = `SELECT id FROM part
-  WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE AND id <> ?`;
+const SELECT_BY_IDENTITY = `SELECT id, ${ROW_COLUMNS.join(', ')} FROM part WHERE ${IDENTITY_WHERE}`;
+const OTHER_WITH_IDENTITY = `SELECT id FROM part WHERE ${IDENTITY_WHERE} AND id <> ?`;
 const UPDATE_BY_ID = `UPDATE part SET ${ROW_COLUMNS.map((c) => `${c} = @${c}`).join(', ')}, updated_at = @updated_at WHERE id = @id`;
 const EVENT_SQL = `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason)
   VALUES (?, ?, ?, ?, ?, ?, ?, ?)`;
@@ -35,9 +34,9 @@ export function updatePart(catalog: Catalog, original: Pick<Part, 'manufacturer'
   const { db } = catalog;
   const at = context.at ?? new Date().toISOString();
   const run = db.transaction((): PartUpdate => {
-    const existing = db.prepare(SELECT_BY_IDENTITY).get(original.manufacturer, original.partNumber) as (PartRow & { id: number }) | undefined;
+    const existing = db.prepare(SELECT_BY_IDENTITY).get(...identityParams(original.manufacturer, original.partNumber)) as (PartRow & { id: number }) | undefined;
     if (!existing) return { ok: false, code: 'unknown-part', message: `${ref(original)} is no longer in the catalog` };
-    const clash = db.prepare(OTHER_WITH_IDENTITY).get(edited.manufacturer, edited.partNumber, existing.id);
+    const clash = db.prepare(OTHER_WITH_IDENTITY).get(...identityParams(edited.manufacturer, edited.partNumber), existing.id);
     if (clash) {
       return {
         ok: false,
@@ -54,7 +53,7 @@ export function updatePart(catalog: Catalog, original: Pick<Part, 'manufacturer'
     if (isApprovalChanged) {
       db.prepare(EVENT_SQL).run(edited.manufacturer, edited.partNumber, at, context.by, existing.approval, edited.approval, edited.approvalNote ?? null, context.reason);
     }
-    const stored = db.prepare(SELECT_BY_IDENTITY).get(edited.manufacturer, edited.partNumber) as PartRow;
+    const stored = db.prepare(SELECT_BY_IDENTITY).get(...identityParams(edited.manufacturer, edited.partNumber)) as PartRow;
     return { ok: true, part: rowToPart(stored), isChanged: true, isApprovalChanged };
   });
   return run.immediate();

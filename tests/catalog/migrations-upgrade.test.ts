@@ -31,7 +31,9 @@ function catalogAtVersion(path: string, v: number): void {
       tj: { marginBelowMaxK: 30, source: 'house rule' },
     };
     db.prepare("INSERT INTO derating_policy (id, body, updated_at, updated_by) VALUES ('old-rules', ?, '2025-06-01', 'ce')").run(JSON.stringify(policy));
-    db.prepare("INSERT INTO import_baseline (manufacturer, part_number, row_digest, source, imported_at) VALUES ('oldtime devices', 'ot-600', ?, 'team.csv', '2025-06-01')").run(BASELINE);
+    // Baselines had a table of their own until migration 006 moved them into the part row.
+    if (v < 6) db.prepare("INSERT INTO import_baseline (manufacturer, part_number, row_digest, source, imported_at) VALUES ('oldtime devices', 'ot-600', ?, 'team.csv', '2025-06-01')").run(BASELINE);
+    else db.prepare('UPDATE part SET import_digest = ?').run(BASELINE);
   }
   db.close();
 }
@@ -60,6 +62,8 @@ describe('upgrading a catalog of every earlier schema version', () => {
     ]);
     catalog.db.exec("INSERT INTO part_search (part_search, rank) VALUES ('integrity-check', 1)");
     expect(checkCatalog(catalog).isHealthy).toBe(true);
+    // Migration 007: identity and typed prefixes walk one index.
+    expect(catalog.db.prepare("SELECT name FROM sqlite_schema WHERE type = 'index' AND tbl_name = 'part' AND sql IS NOT NULL ORDER BY name").pluck().all()).toEqual(['part_candidate', 'part_group', 'part_key']);
     catalog.close();
     const backup = new Database(`${path}.before-v${latestSchemaVersion()}.bak`, { readonly: true });
     expect(backup.pragma('user_version', { simple: true })).toBe(v);

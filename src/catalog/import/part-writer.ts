@@ -1,4 +1,5 @@
 import type BetterSqlite3 from 'better-sqlite3';
+import { availableParallelism } from 'node:os';
 import type { ImportConflict } from '../import-conflicts.js';
 import type { Catalog } from '../open-catalog.js';
 import { ROW_COLUMNS } from '../part-rows.js';
@@ -11,6 +12,7 @@ import { judgeIncoming, type StoredPart } from './import-conflicts-check.js';
 import type { ReadSummary, RowBatch, RowGroup } from './row-collector.js';
 import { shapeRowDigest } from './row-digest.js';
 import { APPROVAL_AT, APPROVAL_NOTE_AT, DIGEST_AT, MANUFACTURER_AT, PART_NUMBER_AT, WRITE_COLUMNS, identityOf, type SqlValue } from './row-values.js';
+import { useRollbackJournal } from './rollback-journal.js';
 import { deferredRebuild, type SchemaRebuild } from './schema-rebuild.js';
 import { WriteStatements } from './write-statements.js';
 
@@ -67,6 +69,8 @@ export class PartWriter {
   private isOpen = true;
   private readonly bulk: Bulk | undefined;
   private readonly finishSearchIndex: () => void = () => {};
+  /** Back to the write-ahead log after a bulk import (rollback-journal.ts). */
+  private readonly restoreJournal: (() => void) | undefined;
   /** Time spent in write(), for the benchmark's phase figures. */
   writeMs = 0;
 
@@ -76,12 +80,15 @@ export class PartWriter {
   ) {
     this.db = catalog.db;
     this.statements = new WriteStatements(this.db, options.at);
+    const countParts = () => this.db.prepare('SELECT count(*) FROM part').pluck().get() as number;
+    // expectedRows overestimates about twofold: bulk when the catalog is small beside the file.
+    const isBulk = (existing: number) => options.expectedRows >= BULK_MIN_ROWS && existing <= Math.min(options.expectedRows / 4, BULK_MAX_EXISTING);
+    // The journal can only change outside a transaction: decided on the count before it, checked again inside.
+    if (options.expectedRows >= BULK_MIN_ROWS && isBulk(countParts())) this.restoreJournal = useRollbackJournal(this.db);
     this.db.exec('BEGIN IMMEDIATE');
     try {
       const maxIdBefore = this.db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
-      const existing = this.db.prepare('SELECT count(*) FROM part').pluck().get() as number;
-      // expectedRows overestimates about twofold: bulk when the catalog is small beside the file.
-      if (options.expectedRows >= BULK_MIN_ROWS && existing <= Math.min(options.expectedRows / 4, BULK_MAX_EXISTING)) {
+      if (isBulk(countParts())) {
         const stored = new Map<string, StoredPart>();
         for (const part of this.statements.all()) stored.set(identityOf(String(part.values[MANUFACTURER_AT]), String(part.values[PART_NUMBER_AT])), part);
         this.bulk = { rebuild: deferredRebuild(this.db), stored, additions: new BulkAdditions(this.db, this.statements, maxIdBefore, options) };
@@ -90,6 +97,7 @@ export class PartWriter {
       }
     } catch (error) {
       this.db.exec('ROLLBACK');
+      this.restoreJournal?.();
       throw error;
     }
   }
@@ -193,11 +201,15 @@ export class PartWriter {
     try {
       if (this.bulk) {
         const { rebuild, additions } = this.bulk;
-        // part_identity first: creating it is also the last check that no part came twice.
-        for (const name of ['part_identity', ...rebuild.pendingIndexes().filter((n) => n !== 'part_identity')]) {
+        // The reader has finished: SQLite may sort on the other cores while it builds the indexes.
+        const threads = this.db.pragma('threads', { simple: true }) as number;
+        this.db.pragma(`threads = ${Math.max(threads, availableParallelism() - 1)}`);
+        // part_key first: creating it is also the last check that no part came twice.
+        for (const name of ['part_key', ...rebuild.pendingIndexes().filter((n) => n !== 'part_key')]) {
           rebuild.restoreIndexes([name]);
           step(`index ${name}`);
         }
+        this.db.pragma(`threads = ${threads}`);
         additions.add(true);
         step('full-text index (last rows)');
         addFieldValues(this.db, summary.fieldValues);
@@ -210,6 +222,7 @@ export class PartWriter {
       this.db.exec('COMMIT');
       step('commit');
       this.isOpen = false;
+      this.restoreJournal?.();
     } catch (error) {
       this.abort();
       throw error;
@@ -228,6 +241,7 @@ export class PartWriter {
     if (!this.isOpen) return;
     this.isOpen = false;
     if (this.db.inTransaction) this.db.exec('ROLLBACK');
+    this.restoreJournal?.();
   }
 }
 

@@ -2,6 +2,7 @@ import type BetterSqlite3 from 'better-sqlite3';
 import { ROW_COLUMNS, type PartRow } from '../part-rows.js';
 import { storedPartOf, type StoredPart } from './import-conflicts-check.js';
 import { PART_NUMBER_AT, WRITE_COLUMNS, type SqlValue } from './row-values.js';
+import { IDENTITY_WHERE, identityParams } from '../identity-sql.js';
 
 const STORED_SQL = `SELECT id, ${ROW_COLUMNS.join(', ')}, import_digest FROM part`;
 const EVENT_SQL = `INSERT INTO approval_event (manufacturer, part_number, at, by, from_state, to_state, note, reason, part_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`;
@@ -46,9 +47,9 @@ export class WriteStatements {
     return this.get(EVENT_SQL);
   }
 
-  /** The stored part with this maker and part number, letter case ignored (part_identity). */
+  /** The stored part with this maker and part number, letter case ignored (part_key). */
   find(manufacturer: string, partNumber: string): StoredPart | undefined {
-    const row = this.get(`${STORED_SQL} WHERE part_number = ? COLLATE NOCASE AND manufacturer = ? COLLATE NOCASE`).get(partNumber, manufacturer) as StoredRow | undefined;
+    const row = this.get(`${STORED_SQL} WHERE ${IDENTITY_WHERE}`).get(...identityParams(manufacturer, partNumber)) as StoredRow | undefined;
     return row ? storedPartOf(row) : undefined;
   }
 

@@ -32,7 +32,7 @@ export function filterScan(prepare: Prepare, where: SqlCondition, words: readonl
   return scanOf(prepare(`SELECT ${COLUMNS} FROM part p WHERE ${where.sql}${not.sql} LIMIT ${limit}`).all(...where.params, ...not.params) as Row[], limit);
 }
 
-/** Part numbers starting with the first word, in key order, along the part_search_key index. */
+/** Part numbers starting with the first word, in key order, along the part_key index. */
 export function prefixScan(prepare: Prepare, where: SqlCondition, words: readonly QueryWord[], fields: FieldWords, limit: number): Scan {
   const [first, ...rest] = words.filter((w) => !w.isNegated);
   if (!first) return { items: [], isCut: false };
@@ -40,7 +40,7 @@ export function prefixScan(prepare: Prepare, where: SqlCondition, words: readonl
   const others = allWords(rest, fields);
   const not = withoutWords(words, fields);
   // INDEXED BY: left to itself the planner may start from a filter and sort the matches.
-  const sql = `SELECT ${COLUMNS} FROM part p INDEXED BY part_search_key WHERE p.search_key >= ? AND p.search_key < ? AND ${where.sql}${others.sql}${not.sql}
+  const sql = `SELECT ${COLUMNS} FROM part p INDEXED BY part_key WHERE p.search_key >= ? AND p.search_key < ? AND ${where.sql}${others.sql}${not.sql}
     ORDER BY p.search_key LIMIT ${limit}`;
   return scanOf(prepare(sql).all(low, `${low}\u{10FFFF}`, ...where.params, ...others.params, ...not.params) as Row[], limit);
 }

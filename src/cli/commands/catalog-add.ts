@@ -3,6 +3,7 @@ import { PART_COLUMNS, type Part } from '../../parts/index.js';
 import { UsageError } from '../cli-error.js';
 import { withCatalog, type CatalogOptions } from '../catalog-session.js';
 import { changeAuthor } from '../user-name.js';
+import { IDENTITY_WHERE, identityParams } from '../../catalog/identity-sql.js';
 
 export interface AddCommandOptions extends CatalogOptions {
   readonly by?: string;
@@ -37,8 +38,8 @@ export function runCatalogAdd(args: readonly string[], options: AddCommandOption
   return withCatalog({ ...options, create: true }, (catalog) => {
     const { part } = decoded;
     const exists = catalog.db
-      .prepare('SELECT 1 FROM part WHERE manufacturer = ? COLLATE NOCASE AND part_number = ? COLLATE NOCASE')
-      .get(part.manufacturer, part.partNumber);
+      .prepare(`SELECT 1 FROM part WHERE ${IDENTITY_WHERE}`)
+      .get(...identityParams(part.manufacturer, part.partNumber));
     if (exists) {
       throw new UsageError(`${part.manufacturer} ${part.partNumber} is already in the catalog`, 'to change it, export, edit and import the catalog');
     }

@@ -3,6 +3,7 @@ import { ROW_COLUMNS, rowToPart, type PartRow } from '../../catalog/part-rows.js
 import type { Part } from '../../parts/index.js';
 import { queryWords, searchText, substringSearch, type PartSearch } from '../hooks/use-part-search.js';
 import type { PartPage, PartPager } from '../services.js';
+import { KEY_ORDER } from '../../catalog/identity-sql.js';
 
 /** Small catalogs: every part in memory, searched with the injected strategy. */
 export function memoryPager(parts: readonly Part[], search: PartSearch = substringSearch): PartPager {
@@ -15,12 +16,12 @@ export function memoryPager(parts: readonly Part[], search: PartSearch = substri
 
 /**
  * Large catalogs: nothing is loaded at start. Without a query, pages come straight from SQLite in
- * part-number order (an index scan). The first search reads one compact search string per part
+ * part-number order, separators and letter case ignored (an index scan along part_key). The first search reads one compact search string per part
  * (id and squashed text, not the parts) so each further keystroke filters in memory in a few
  * milliseconds; only the rows of the visible page are read as parts.
  */
 export function sqlPager(db: BetterSqlite3.Database): PartPager {
-  const ORDER = 'ORDER BY part_number COLLATE NOCASE, manufacturer COLLATE NOCASE, id';
+  const ORDER = `ORDER BY ${KEY_ORDER}`;
   const page = db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part ${ORDER} LIMIT ? OFFSET ?`);
   const byIds = db.prepare(`SELECT id, ${ROW_COLUMNS.join(', ')} FROM part WHERE id IN (SELECT value FROM json_each(?))`);
   let total: number | undefined;
