@@ -3,9 +3,8 @@ import type { CellIssue } from '../part-cells.js';
 import { cellCountIssue, checkCsvHeader, emptyFileIssue, unreadableIssue } from './csv-header.js';
 import { CsvTokenizer, type CsvProblem } from './csv-tokenizer.js';
 import { compileRowDecoder, decodeByReference, type DecodedRecord } from './row-decoder.js';
-import { MANUFACTURER_AT, PART_NUMBER_AT, WRITE_COLUMNS, identityOf, type SqlValue } from './row-values.js';
-import { FIELD_VALUE_COLUMNS } from './field-values.js';
-import { TextTable } from './text-table.js';
+import { FileIdentities } from './file-identities.js';
+import { type SqlValue } from './row-values.js';
 
 /*
  * The reading side of an import: CSV text in, checked rows out, in batches a writer can insert
@@ -39,8 +38,6 @@ export interface ReadSummary {
   readonly readMs?: number;
 }
 
-const FIELD_VALUE_AT = FIELD_VALUE_COLUMNS.map((c) => WRITE_COLUMNS.indexOf(c));
-
 /** Rows per multi-row INSERT: one prepared statement per shape. */
 export const GROUP_ROWS = 64;
 const BATCH_ROWS = 4096;
@@ -58,14 +55,13 @@ export class RowCollector {
   private decode: ((cells: readonly string[]) => DecodedRecord) | undefined;
   private records = 0;
   private isUnreadable = false;
-  /** Each part the file named so far (maker and number in lower case), with its line. */
-  private readonly named = new TextTable<number>();
+  /** Parts named so far, and the field values. */
+  private readonly identities: FileIdentities;
   private readonly shapes = new Map<number, ShapeRows>();
   private newShapes: number[][] = [];
   private groups: RowGroup[] = [];
   private issues: RowIssue[] = [];
   private pendingRows = 0;
-  private readonly fieldValues = FIELD_VALUE_COLUMNS.map(() => new TextTable<true>());
   private readonly sink = (cells: readonly string[], count: number, line: number) => this.record(cells, count, line);
 
   /** Records come split already (addRecord), not as CSV text. */
@@ -79,6 +75,7 @@ export class RowCollector {
     input: 'csv' | 'latin1' | 'records' = 'csv',
   ) {
     this.isRecordInput = input === 'records';
+    this.identities = new FileIdentities(file);
     this.tokenizer = new CsvTokenizer({ isLatin1: input === 'latin1' });
   }
 
@@ -113,8 +110,7 @@ export class RowCollector {
     }
     for (const shape of this.shapes.values()) this.release(shape);
     this.flush();
-    const fieldValues = Object.fromEntries(FIELD_VALUE_COLUMNS.map((c, i) => [c, [...this.fieldValues[i]!.keys()]]));
-    return { records: this.records, isUnreadable: this.isUnreadable, fieldValues };
+    return { records: this.records, isUnreadable: this.isUnreadable, fieldValues: this.identities.fieldValues() };
   }
 
   /** A record already split into cells by column (the JSON format), decoded by the reference. */
@@ -125,7 +121,7 @@ export class RowCollector {
       for (const i of decoded.issues) this.issues.push(this.located(line, i));
       return;
     }
-    this.accept(decoded.values, line, cells.part_number ?? '');
+    this.accept(decoded.values, line);
     if (this.pendingRows >= BATCH_ROWS) this.flush();
   }
 
@@ -154,7 +150,7 @@ export class RowCollector {
       this.columns = cells.slice(0, count).map((c) => c.trim());
       const issues = checkCsvHeader(this.file, this.columns, line);
       if (issues.length > 0) this.unreadable(issues);
-      else this.decode = compileRowDecoder(this.columns);
+      else this.decode = compileRowDecoder(this.columns, true);
       return;
     }
     this.records++;
@@ -167,7 +163,7 @@ export class RowCollector {
       for (const i of decoded.issues) this.issues.push(this.located(line, i));
       return;
     }
-    this.accept(decoded.values, line, cells[this.columns.indexOf('part_number')] ?? '');
+    this.accept(decoded.values, line);
   }
 
   private located(line: number, issue: CellIssue): RowIssue {
@@ -175,15 +171,12 @@ export class RowCollector {
   }
 
   /** A good row: refused if the file named its part before, else queued with rows of its shape. */
-  private accept(values: SqlValue[], line: number, partNumberCell: string): void {
-    const identity = identityOf(values[MANUFACTURER_AT] as string, values[PART_NUMBER_AT] as string);
-    const earlier = this.named.setIfAbsent(identity, line);
-    if (earlier !== undefined) {
-      const value = partNumberCell;
-      this.issues.push({ file: this.file, line, column: 'part_number', value, message: `the same manufacturer and part number as line ${earlier}`, expected: 'each part once per file' });
+  private accept(values: SqlValue[], line: number): void {
+    const refused = this.identities.admit(values, line);
+    if (refused) {
+      this.issues.push(refused);
       return;
     }
-    for (let i = 0; i < FIELD_VALUE_AT.length; i++) this.fieldValues[i]!.setIfAbsent(values[FIELD_VALUE_AT[i]!] as string, true);
     // The shape as a number: one bit per column (WRITE_COLUMNS has fewer than 53).
     let mask = 0;
     for (let i = 0, bit = 1; i < values.length; i++, bit *= 2) if (values[i] !== null) mask += bit;

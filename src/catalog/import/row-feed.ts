@@ -32,10 +32,15 @@ export type FeedMessage =
 const WORKER_MIN_BYTES = 4 << 20;
 const MAX_IN_FLIGHT = 6;
 
-/** The compiled worker, present when running from dist/ (tests on sources read in this thread). */
+/**
+ * The compiled worker, present when running from dist/ (tests on sources read in this thread):
+ * its bundle when built (about half a second sooner to start than the modules), else the module.
+ */
 function workerScript(): string | undefined {
   const here = fileURLToPath(import.meta.url);
   if (!here.includes(`${join('dist')}`)) return undefined;
+  const bundled = join(packageRoot(), 'dist', 'bundle', 'parse-worker.cjs');
+  if (existsSync(bundled)) return bundled;
   const script = join(packageRoot(), 'dist', 'src', 'catalog', 'import', 'parse-worker.js');
   return existsSync(script) ? script : undefined;
 }
