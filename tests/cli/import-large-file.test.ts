@@ -8,7 +8,7 @@ import { useTempDir } from '../helpers/temp-dir.js';
 
 const tempDir = useTempDir();
 
-/** Files of 4 MiB and more are read and checked in a worker thread while this one writes (row-feed.ts). */
+/** Files of 4 MiB and more are read in a worker thread and checked row against row on the writing thread (row-feed.ts). */
 describe('a large file imported through the reading worker', () => {
   it('refuses a part named twice, far apart and in another letter case, with both lines, and writes nothing', () => {
     const dir = tempDir();

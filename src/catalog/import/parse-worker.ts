@@ -19,13 +19,14 @@ function post(message: FeedMessage): void {
 try {
   const started = performance.now();
   let waitedMs = 0;
+  // Rows are checked against each other on the writing thread (row-feed.ts), not here.
   const summary = readCsvFile(input.path, input.file, (batch) => {
     // signal[0] counts batches sent, signal[1] those the main thread took.
     const waitFrom = performance.now();
     while (Atomics.load(signal, 0) - Atomics.load(signal, 1) >= input.maxInFlight) Atomics.wait(signal, 1, Atomics.load(signal, 1), 1000);
     waitedMs += performance.now() - waitFrom;
     post({ type: 'batch', batch });
-  });
+  }, undefined, false);
   post({ type: 'done', summary: { ...summary, readMs: performance.now() - started - waitedMs } });
 } catch (error) {
   post({ type: 'failed', message: error instanceof Error ? (error.stack ?? error.message) : String(error) });

@@ -11,8 +11,8 @@ const CHUNK_BYTES = 1 << 16;
  * the tokenizer decodes the few cells that need it; a record cut by the chunk's end is carried to
  * the next chunk as bytes, so every chunk is one flat string.
  */
-export function readCsvFile(path: string, file: string, onBatch: (batch: RowBatch) => void, chunkBytes = CHUNK_BYTES): ReadSummary {
-  const collector = new RowCollector(file, onBatch, 'latin1');
+export function readCsvFile(path: string, file: string, onBatch: (batch: RowBatch) => void, chunkBytes = CHUNK_BYTES, isCheckingIdentity = true): ReadSummary {
+  const collector = new RowCollector(file, onBatch, 'latin1', isCheckingIdentity);
   let buffer = Buffer.allocUnsafe(chunkBytes);
   let carried = 0;
   let isFirst = true;

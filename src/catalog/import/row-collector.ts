@@ -55,8 +55,8 @@ export class RowCollector {
   private decode: ((cells: readonly string[]) => DecodedRecord) | undefined;
   private records = 0;
   private isUnreadable = false;
-  /** Parts named so far, and the field values. */
-  private readonly identities: FileIdentities;
+  /** Parts named so far and field values; undefined when the writing thread keeps them (row-feed.ts). */
+  private readonly identities: FileIdentities | undefined;
   private readonly shapes = new Map<number, ShapeRows>();
   private newShapes: number[][] = [];
   private groups: RowGroup[] = [];
@@ -68,14 +68,19 @@ export class RowCollector {
   private readonly isRecordInput: boolean;
   private isEnded = false;
 
-  /** `input`: CSV text, CSV bytes read as Latin-1 (pushChunk), or records split already (addRecord). */
+  /**
+   * `input`: CSV text, CSV bytes read as Latin-1 (pushChunk), or records split already (addRecord).
+   * Without `isCheckingIdentity` rows are not checked against each other and no field values are
+   * gathered: the caller does that (FileIdentities.checkBatch).
+   */
   constructor(
     private readonly file: string,
     private readonly onBatch: (batch: RowBatch) => void,
     input: 'csv' | 'latin1' | 'records' = 'csv',
+    isCheckingIdentity = true,
   ) {
     this.isRecordInput = input === 'records';
-    this.identities = new FileIdentities(file);
+    this.identities = isCheckingIdentity ? new FileIdentities(file) : undefined;
     this.tokenizer = new CsvTokenizer({ isLatin1: input === 'latin1' });
   }
 
@@ -110,7 +115,7 @@ export class RowCollector {
     }
     for (const shape of this.shapes.values()) this.release(shape);
     this.flush();
-    return { records: this.records, isUnreadable: this.isUnreadable, fieldValues: this.identities.fieldValues() };
+    return { records: this.records, isUnreadable: this.isUnreadable, fieldValues: this.identities?.fieldValues() ?? {} };
   }
 
   /** A record already split into cells by column (the JSON format), decoded by the reference. */
@@ -172,7 +177,7 @@ export class RowCollector {
 
   /** A good row: refused if the file named its part before, else queued with rows of its shape. */
   private accept(values: SqlValue[], line: number): void {
-    const refused = this.identities.admit(values, line);
+    const refused = this.identities?.admit(values, line);
     if (refused) {
       this.issues.push(refused);
       return;

@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { MessageChannel, Worker, receiveMessageOnPort, type MessagePort } from 'node:worker_threads';
 import { packageRoot } from '../package-root.js';
+import { FileIdentities } from './file-identities.js';
 import { readCsvFile } from './read-csv-file.js';
 import type { ReadSummary, RowBatch } from './row-collector.js';
 
@@ -56,6 +57,9 @@ function feedFromWorker(script: string, path: string, file: string, onBatch: (ba
   const { port1, port2 } = new MessageChannel();
   const input: WorkerInput = { path, file, signal, port: port2, maxInFlight: MAX_IN_FLIGHT };
   const worker = new Worker(script, { workerData: input, transferList: [port2] });
+  // Reading bounds a large import; this thread waits for the worker otherwise (bench/README.md, import).
+  const identities = new FileIdentities(file);
+  const shapes: number[][] = [];
   try {
     for (;;) {
       const seen = Atomics.load(counts, 0);
@@ -66,10 +70,11 @@ function feedFromWorker(script: string, path: string, file: string, onBatch: (ba
       }
       const message = received.message as FeedMessage;
       if (message.type === 'failed') throw new Error(`import worker failed: ${message.message}`);
-      if (message.type === 'done') return message.summary;
+      if (message.type === 'done') return { ...message.summary, fieldValues: identities.fieldValues() };
       Atomics.add(counts, 1, 1);
       Atomics.notify(counts, 1);
-      onBatch(message.batch);
+      shapes.push(...message.batch.newShapes);
+      onBatch(identities.checkBatch(message.batch, shapes));
     }
   } finally {
     port1.close();
