@@ -1,13 +1,14 @@
 import type BetterSqlite3 from 'better-sqlite3';
 import type { WriteStatements } from './write-statements.js';
 
-// Rows the bulk path adds to the full-text index at a time.
-const SEARCH_INDEX_ROWS = 250_000;
+// Rows the bulk path adds to the full-text index at a time: few enough segments to merge, and a
+// short last step (the rows indexed after the reader has finished wait on this thread alone).
+const SEARCH_INDEX_ROWS = 100_000;
 
 /**
  * The bulk path's approval trail entries and full-text entries for the parts it added (ids above
  * `maxIdBefore`), in row order so both grow at their ends, written while the reader works on. The
- * trail takes every batch; the full-text index a quarter million rows at a time, because FTS5
+ * trail takes every batch; the full-text index a hundred thousand rows at a time, because FTS5
  * starts a segment at every statement and merging hundreds of them cost more than the inserts
  * (bench/README.md, import). Each trail entry names its part's row (part_id, migration 006).
  */
