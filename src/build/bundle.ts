@@ -12,6 +12,7 @@
 import { build, type BuildOptions, type Plugin } from 'esbuild';
 import { spawnSync } from 'node:child_process';
 import { chmodSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import Module from 'node:module';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { packageRoot } from '../catalog/package-root.js';
@@ -199,12 +200,15 @@ const results = await Promise.all([
  * instead of decoding UTF-8 into a two-byte one (about 35 ms for app.cjs here). esbuild escapes
  * strings but leaves a few characters in regular expressions (µ, Ω, ’); a \uXXXX escape of each
  * UTF-16 unit means the same there, in strings, templates and identifiers.
+ * Written already wrapped as Node wraps a CommonJS module (without the entry's #! line), so the
+ * launcher compiles the file's text as it is instead of a copy joined to the wrapper.
  */
 for (const file of results.flatMap((r) => Object.keys(r.metafile!.outputs))) {
   const path = join(root, file);
-  const text = readFileSync(path, 'utf8');
+  const text = readFileSync(path, 'utf8').replace(/^#!.*/, '');
   if (/String\.raw`[^`]*[^\x00-\x7f]/.test(text)) throw new Error(`${file}: a raw template holds non-ASCII text; escaping would change it`);
-  writeFileSync(path, text.replace(/[^\x00-\x7f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`));
+  const ascii = text.replace(/[^\x00-\x7f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  writeFileSync(path, Module.wrap(ascii));
 }
 
 const bytes = results.flatMap((r) => Object.values(r.metafile!.outputs)).reduce((sum, o) => sum + o.bytes, 0);
