@@ -167,6 +167,24 @@ const sqliteAddon: Plugin = {
   },
 };
 
+/**
+ * commander loads node:child_process as it loads (for executable subcommands, which Headroom has
+ * none of), and with it Node's dgram and socket-list modules: about 2 ms of every start. Here it
+ * loads on first spawn.
+ */
+const lazyChildProcess: Plugin = {
+  name: 'lazy-child-process',
+  setup(b) {
+    b.onLoad({ filter: /[\\/]commander[\\/]lib[\\/]command\.js$/ }, (args) => {
+      const text = readFileSync(args.path, 'utf8');
+      const eager = "const childProcess = require('node:child_process');";
+      // Pinned commander version: if its source moves, fail the build rather than ship a guess.
+      if (!text.includes(eager) || text.split('childProcess.').length !== 4) throw new Error(`lazy-child-process: ${args.path} changed; review this plugin`);
+      return { contents: text.replace(eager, "const childProcess = { spawn: (...args) => require('node:child_process').spawn(...args) };"), loader: 'js', resolveDir: dirname(args.path) };
+    });
+  },
+};
+
 const common: BuildOptions = {
   absWorkingDir: root,
   bundle: true,
@@ -191,8 +209,8 @@ const common: BuildOptions = {
 
 const entry = [join(dist, 'src', 'cli', 'main.js')];
 const results = await Promise.all([
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, withoutScreens, sqliteAddon] }),
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs, quickTextWidth, sqliteAddon] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, lazyChildProcess, withoutScreens, sqliteAddon] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, lazyChildProcess, inkAsCommonJs, quickTextWidth, sqliteAddon] }),
 ]);
 
 /*
