@@ -5,7 +5,7 @@ import { solvePosition } from '../../circuits/solve-position.js';
 import { UsageError } from '../cli-error.js';
 import type { CatalogOptions } from '../catalog-session.js';
 import { designError, loadDesign } from './design-file.js';
-import { teamPolicies } from './policies.js';
+import { teamPolicies } from './team-policies.js';
 
 export interface SolveOutcome {
   readonly design: string;
