@@ -218,15 +218,17 @@ const results = await Promise.all([
  * instead of decoding UTF-8 into a two-byte one (about 35 ms for app.cjs here). esbuild escapes
  * strings but leaves a few characters in regular expressions (µ, Ω, ’); a \uXXXX escape of each
  * UTF-16 unit means the same there, in strings, templates and identifiers.
- * Written already wrapped as Node wraps a CommonJS module (without the entry's #! line), so the
- * launcher compiles the file's text as it is instead of a copy joined to the wrapper.
+ * The launcher's bundles are written already wrapped as Node wraps a CommonJS module (without the
+ * entry's #! line), so it compiles the file's text as it is instead of a copy joined to the wrapper.
  */
+const launched = new Set(['cli.cjs', 'app.cjs'].map((name) => join(outdir, name)));
 for (const file of results.flatMap((r) => Object.keys(r.metafile!.outputs))) {
   const path = join(root, file);
-  const text = readFileSync(path, 'utf8').replace(/^#!.*/, '');
+  const text = readFileSync(path, 'utf8');
   if (/String\.raw`[^`]*[^\x00-\x7f]/.test(text)) throw new Error(`${file}: a raw template holds non-ASCII text; escaping would change it`);
   const ascii = text.replace(/[^\x00-\x7f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
-  writeFileSync(path, Module.wrap(ascii));
+  // Only the bundles the launcher loads: any other file Node runs itself, and wraps itself.
+  writeFileSync(path, launched.has(path) ? Module.wrap(ascii.replace(/^#!.*/, '')) : ascii);
 }
 
 const bytes = results.flatMap((r) => Object.values(r.metafile!.outputs)).reduce((sum, o) => sum + o.bytes, 0);
