@@ -11,7 +11,8 @@
  */
 import { build, type BuildOptions, type Plugin } from 'esbuild';
 import { spawnSync } from 'node:child_process';
-import { chmodSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import Module from 'node:module';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { packageRoot } from '../catalog/package-root.js';
@@ -166,6 +167,24 @@ const sqliteAddon: Plugin = {
   },
 };
 
+/**
+ * commander loads node:child_process as it loads (for executable subcommands, which Headroom has
+ * none of), and with it Node's dgram and socket-list modules: about 2 ms of every start. Here it
+ * loads on first spawn.
+ */
+const lazyChildProcess: Plugin = {
+  name: 'lazy-child-process',
+  setup(b) {
+    b.onLoad({ filter: /[\\/]commander[\\/]lib[\\/]command\.js$/ }, (args) => {
+      const text = readFileSync(args.path, 'utf8');
+      const eager = "const childProcess = require('node:child_process');";
+      // Pinned commander version: if its source moves, fail the build rather than ship a guess.
+      if (!text.includes(eager) || text.split('childProcess.').length !== 4) throw new Error(`lazy-child-process: ${args.path} changed; review this plugin`);
+      return { contents: text.replace(eager, "const childProcess = { spawn: (...args) => require('node:child_process').spawn(...args) };"), loader: 'js', resolveDir: dirname(args.path) };
+    });
+  },
+};
+
 const common: BuildOptions = {
   absWorkingDir: root,
   bundle: true,
@@ -190,8 +209,8 @@ const common: BuildOptions = {
 
 const entry = [join(dist, 'src', 'cli', 'main.js')];
 const results = await Promise.all([
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, withoutScreens, sqliteAddon] }),
-  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, inkAsCommonJs, quickTextWidth, sqliteAddon] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'cli.cjs'), plugins: [zodEnglishOnly, lazyChildProcess, withoutScreens, sqliteAddon] }),
+  build({ ...common, entryPoints: entry, outfile: join(outdir, 'app.cjs'), plugins: [zodEnglishOnly, lazyChildProcess, inkAsCommonJs, quickTextWidth, sqliteAddon] }),
   // A large import's reading thread (row-feed.ts): one file instead of the hundred modules it
   // would load, so the first rows reach the writer sooner.
   build({ ...common, entryPoints: [join(dist, 'src', 'catalog', 'import', 'parse-worker.js')], outfile: join(outdir, 'parse-worker.cjs'), plugins: [zodEnglishOnly] }),
@@ -202,12 +221,17 @@ const results = await Promise.all([
  * instead of decoding UTF-8 into a two-byte one (about 35 ms for app.cjs here). esbuild escapes
  * strings but leaves a few characters in regular expressions (µ, Ω, ’); a \uXXXX escape of each
  * UTF-16 unit means the same there, in strings, templates and identifiers.
+ * The launcher's bundles are written already wrapped as Node wraps a CommonJS module (without the
+ * entry's #! line), so it compiles the file's text as it is instead of a copy joined to the wrapper.
  */
+const launched = new Set(['cli.cjs', 'app.cjs'].map((name) => join(outdir, name)));
 for (const file of results.flatMap((r) => Object.keys(r.metafile!.outputs))) {
   const path = join(root, file);
   const text = readFileSync(path, 'utf8');
   if (/String\.raw`[^`]*[^\x00-\x7f]/.test(text)) throw new Error(`${file}: a raw template holds non-ASCII text; escaping would change it`);
-  writeFileSync(path, text.replace(/[^\x00-\x7f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`));
+  const ascii = text.replace(/[^\x00-\x7f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  // Only the bundles the launcher loads: any other file Node runs itself, and wraps itself.
+  writeFileSync(path, launched.has(path) ? Module.wrap(ascii.replace(/^#!.*/, '')) : ascii);
 }
 
 const bytes = results.flatMap((r) => Object.values(r.metafile!.outputs)).reduce((sum, o) => sum + o.bytes, 0);
@@ -216,13 +240,24 @@ console.log(`bundle: cli.cjs, app.cjs and parse-worker.cjs, ${(bytes / 1e6).toFi
 // `headroom` is the launcher itself (package.json bin): runnable as a file, too.
 chmodSync(join(dist, 'src', 'cli', 'launch.cjs'), 0o755);
 
-// One typical command leaves the code cache for the command-line bundle.
+/*
+ * One typical command leaves the code cache for the command-line bundle. It runs twice: the first
+ * run also builds the demo catalog, and a cache holds every function its run compiled, so its
+ * cache is dropped and the second run's (a pick on an existing catalog) kept: about 40 KB less
+ * for every command to read and deserialise.
+ */
 const data = mkdtempSync(join(tmpdir(), 'headroom-build-'));
-const trained = spawnSync(
-  process.execPath,
-  [join(dist, 'src', 'cli', 'launch.cjs'), '--demo', 'pick', join(root, 'catalog-demo', 'roles', 'buck-freewheel.yaml'), '--ref', 'D4'],
-  { env: { ...process.env, XDG_DATA_HOME: data, NO_COLOR: '1' }, encoding: 'utf8' },
-);
+for (const pass of ['demo catalog', 'code cache']) {
+  for (const file of readdirSync(outdir).filter((f) => f.endsWith('.cache'))) rmSync(join(outdir, file));
+  const trained = spawnSync(
+    process.execPath,
+    [join(dist, 'src', 'cli', 'launch.cjs'), '--demo', 'pick', join(root, 'catalog-demo', 'roles', 'buck-freewheel.yaml'), '--ref', 'D4'],
+    { env: { ...process.env, XDG_DATA_HOME: data, NO_COLOR: '1' }, encoding: 'utf8' },
+  );
+  if (trained.status !== 0) {
+    rmSync(data, { recursive: true, force: true });
+    throw new Error(`bundle check failed (${pass}): headroom pick exited ${trained.status}\n${trained.stderr}`);
+  }
+}
 rmSync(data, { recursive: true, force: true });
-if (trained.status !== 0) throw new Error(`bundle check failed: headroom pick exited ${trained.status}\n${trained.stderr}`);
 console.log('bundle: checked with `headroom --demo pick` (code cache written)');

@@ -8,6 +8,13 @@ export interface BoundedRow {
 /** Highest bound first; equal bounds by id, so every search visits rows in one order. */
 const before = (a: BoundedRow, b: BoundedRow) => a.ub > b.ub || (a.ub === b.ub && a.id < b.id);
 
+/** Without a destructuring swap, which allocates while the code is cold: a search pushes thousands of rows. */
+function swap(a: BoundedRow[], i: number, j: number): void {
+  const t = a[i]!;
+  a[i] = a[j]!;
+  a[j] = t;
+}
+
 /** A binary max-heap of rows: a search may read thousands and evaluate a hundred. */
 export class CandidateHeap {
   private readonly items: BoundedRow[] = [];
@@ -27,7 +34,7 @@ export class CandidateHeap {
     while (i > 0) {
       const parent = (i - 1) >> 1;
       if (!before(a[i]!, a[parent]!)) break;
-      [a[i], a[parent]] = [a[parent]!, a[i]!];
+      swap(a, i, parent);
       i = parent;
     }
   }
@@ -46,7 +53,7 @@ export class CandidateHeap {
         if (l < a.length && before(a[l]!, a[m]!)) m = l;
         if (r < a.length && before(a[r]!, a[m]!)) m = r;
         if (m === i) break;
-        [a[i], a[m]] = [a[m]!, a[i]!];
+        swap(a, i, m);
         i = m;
       }
     }

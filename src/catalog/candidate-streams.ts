@@ -4,7 +4,7 @@ import { APPROVAL_STATES, LIFECYCLES, type Part } from '../parts/index.js';
 import { APPROVAL_POINTS, LIFECYCLE_POINTS, lnPrice, pricePoints, type PriceScale } from '../selection/index.js';
 import type { CandidateHeap, BoundedRow } from './candidate-heap.js';
 import { MARGIN_CEILING, priceParams, streamParams, type SqlValue, type StreamSql } from './candidates-sql.js';
-import { ROW_COLUMNS, rowToPart, type PartRow } from './part-rows.js';
+import { ROW_COLUMNS, valuesToPart } from './part-rows.js';
 
 /*
  * The streams of a candidate search: the parts of one kind, approval, lifecycle and currency that
@@ -98,10 +98,11 @@ export function readStream(db: BetterSqlite3.Database, sql: StreamSql, s: Stream
 /** Full rows for the ids, in the order given. */
 export function readParts(db: BetterSqlite3.Database, ids: readonly number[]): Part[] {
   // One rowid lookup each: measured several times quicker on a cold 1 M-part catalog than one
-  // statement over a json_each list of the ids (bench/README.md, pick).
-  const byId = prepared(db, `SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE id = ?`);
+  // statement over a json_each list of the ids (bench/README.md, pick). Values as arrays: quicker
+  // than 45-key row objects; the SQL text is this function's own, so its cached statement is raw.
+  const byId = prepared(db, `SELECT ${ROW_COLUMNS.join(', ')} FROM part WHERE id = ? -- read raw`).raw(true);
   return ids.flatMap((id) => {
-    const row = byId.get(id) as PartRow | undefined;
-    return row ? [rowToPart(row)] : [];
+    const values = byId.get(id) as (string | number | null)[] | undefined;
+    return values ? [valuesToPart(values)] : [];
   });
 }

@@ -30,14 +30,20 @@ export function catalogPathFor(options: CatalogOptions): string {
   return resolveCatalogPath(options.catalog);
 }
 
-/** Opens the catalog for a command, creating it only for commands that write. */
-export function withCatalog<T>(options: CatalogOptions & { create?: boolean }, use: (catalog: Catalog) => T): T {
+/** Opens the catalog for a command, creating it only for commands that write; the caller closes it. */
+export function openCatalogFor(options: CatalogOptions & { create?: boolean }): Catalog {
   const path = catalogPathFor(options);
   if (options.create) mkdirSync(dirname(path), { recursive: true });
   const catalog = openCatalog(path, { create: options.create ?? false });
   if (catalog.backupPath) {
     process.stderr.write(`Upgraded ${path} to catalog schema ${catalog.migrated.at(-1)}; the previous file was copied to ${catalog.backupPath}.\n`);
   }
+  return catalog;
+}
+
+/** Opens the catalog for a command, creating it only for commands that write. */
+export function withCatalog<T>(options: CatalogOptions & { create?: boolean }, use: (catalog: Catalog) => T): T {
+  const catalog = openCatalogFor(options);
   try {
     return use(catalog);
   } finally {

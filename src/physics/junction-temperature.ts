@@ -7,6 +7,18 @@ export interface JunctionTemperatureInput {
   readonly ambientK: number;
   readonly rthJaKPerW: number;
   readonly tjMaxK: number;
+  /**
+   * Optional: a lower bound of lossAt over [t1, t2] for an interval with no breakpoint inside, to
+   * the rounding of lossAt's own arithmetic. The bracketing scan then skips runs of grid points
+   * where the bound proves the junction still heats above them: the same answer, far fewer losses.
+   */
+  readonly lossBound?: LossBound;
+}
+
+export interface LossBound {
+  /** Sorted. */
+  readonly breakpoints: readonly number[];
+  readonly lowerBound: (t1: number, t2: number) => number;
 }
 
 export type RunawayReason =
@@ -38,6 +50,12 @@ const TOLERANCE_K = 1e-9;
 const MAX_FIXED_POINT_ITERATIONS = 2000;
 const SCAN_STEPS = 2000;
 const DERIVATIVE_STEP_K = 1e-3;
+/** Grid points the scan tries to skip at once with a loss bound. */
+const SKIP_RUN = 32;
+/** Room for the rounding between a loss bound and lossAt itself (relative, watts, kelvin). */
+const BOUND_SLACK_REL = 1e-9;
+const BOUND_SLACK_W = 1e-12;
+const BOUND_SLACK_K = 1e-9;
 
 /**
  * Self-consistent junction temperature Tj = Ta + RθJA·P(Tj): the lowest stable heat balance below Tj max.
@@ -86,7 +104,32 @@ export function solveJunctionTemperature(input: JunctionTemperatureInput): Junct
     previousStep = step;
     if (tK > tjMaxK) break;
   }
-  return bracketLowestBalance(ambientK, tjMaxK, heated, loopGain, stable);
+  return bracketLowestBalance(ambientK, tjMaxK, heated, loopGain, stable, skipper(input));
+}
+
+/**
+ * With a loss bound: a run of grid points from k on (within one stretch between breakpoints, at
+ * most SKIP_RUN) and whether every one of them provably heats above itself, so the scan would
+ * pass it.
+ */
+type Skipper = (k: number, gridAt: (k: number) => number) => { readonly points: number; readonly isProven: boolean };
+
+function skipper(input: JunctionTemperatureInput): Skipper | undefined {
+  const bound = input.lossBound;
+  if (!bound) return undefined;
+  const { ambientK, rthJaKPerW } = input;
+  let next = 0;
+  return (k, gridAt) => {
+    const first = gridAt(k);
+    const breakpoints = bound.breakpoints;
+    while (next < breakpoints.length && breakpoints[next]! < first) next++;
+    const end = next < breakpoints.length ? breakpoints[next]! : Number.POSITIVE_INFINITY;
+    let last = k;
+    while (last < SCAN_STEPS && last - k + 1 < SKIP_RUN && gridAt(last + 1) <= end) last++;
+    const lb = bound.lowerBound(first, gridAt(last));
+    const floor = lb - Math.abs(lb) * BOUND_SLACK_REL - BOUND_SLACK_W;
+    return { points: last - k + 1, isProven: Number.isFinite(lb) && ambientK + rthJaKPerW * floor > gridAt(last) + BOUND_SLACK_K };
+  };
 }
 
 function bracketLowestBalance(
@@ -95,14 +138,30 @@ function bracketLowestBalance(
   heated: (tK: number) => number,
   loopGain: (tK: number) => number,
   stable: (tjK: number, iterations: number, solver: 'bracketing') => JunctionTemperatureResult | null,
+  skip?: Skipper,
 ): JunctionTemperatureResult {
   const excess = (tK: number): number => heated(tK) - tK;
   const stepK = (tjMaxK - ambientK) / SCAN_STEPS;
+  const gridAt = (k: number) => (k === SCAN_STEPS ? tjMaxK : ambientK + k * stepK);
   let evaluations = 0;
   let low = ambientK;
+  // Grid points up to `proven` heat above themselves (the loss bound says so): passed without a
+  // loss but counted, so the answer and its count are the plain scan's. A run the bound cannot
+  // prove is scanned point by point before the next try.
+  let proven = 0;
+  let nextTry = 1;
   for (let k = 1; k <= SCAN_STEPS; k++) {
-    const high = k === SCAN_STEPS ? tjMaxK : ambientK + k * stepK;
+    const high = gridAt(k);
     evaluations++;
+    if (skip && k >= nextTry) {
+      const run = skip(k, gridAt);
+      nextTry = k + run.points;
+      if (run.isProven) proven = k + run.points - 1;
+    }
+    if (k <= proven) {
+      low = high;
+      continue;
+    }
     if (excess(high) <= 0) {
       let a = low;
       let b = high;

@@ -87,10 +87,12 @@ function conduction(part: Part, op: OperatingPoint): Term<ConductionShape> {
     return { ok: true, shape: undefined, ...(pulse ? { note: () => `no average forward current${pulse}` } : {}) };
   }
   if (part.vfPoints.length === 0) return { ok: false, reason: 'the catalog gives no VF points, so the conduction loss is unknown' };
-  // Each temperature group of points is used somewhere in Tj: check each once, before the solver runs.
+  // Each temperature group of points is used somewhere in Tj: check each once, before the solver
+  // runs. The value alone first (NaN when there is no estimate); the words only for the message.
   const temperatures = [...new Set(part.vfPoints.map((p) => p.tjK))];
   for (const tjK of temperatures) {
     for (const ifA of [i.conductingA, i.peakA]) {
+      if (!Number.isNaN(forwardVoltageValue(part.vfPoints, ifA, tjK))) continue;
       const probe = estimateForwardVoltage(part.vfPoints, ifA, tjK);
       if (!probe.ok) return { ok: false, reason: probe.message };
     }

@@ -81,10 +81,11 @@ export function rankEvaluations(evaluations: readonly PartEvaluation[], options:
     .map(score)
     .sort((a, b) => TIER[a.evaluation.verdict] - TIER[b.evaluation.verdict] || b.score - a.score || compareIdentity(a.evaluation.part, b.evaluation.part))
     .map((c, i) => ({ ...c, rank: i + 1 }));
+  // Sort keys worked out once per part, not at every comparison: a search ranks a hundred failures.
   const failed = failing
-    .map(score)
-    .sort((a, b) => failures(a) - failures(b) || closeness(b) - closeness(a) || compareIdentity(a.evaluation.part, b.evaluation.part))
-    .map((c, i) => ({ ...c, rank: i + 1 }));
+    .map((e) => ({ c: score(e), failures: failures(e), closeness: closeness(e) }))
+    .sort((a, b) => a.failures - b.failures || b.closeness - a.closeness || compareIdentity(a.c.evaluation.part, b.c.evaluation.part))
+    .map(({ c }, i) => ({ ...c, rank: i + 1 }));
   return { candidates, failed, passingCount: candidates.filter((c) => c.evaluation.verdict === 'pass').length };
 }
 
@@ -104,10 +105,18 @@ export function scoreEvaluation(evaluation: PartEvaluation, scale: PriceScale, p
 /** No hard rating limit fails: what the catalog's SQL prefilter also keeps. */
 const meetsRatings = (e: PartEvaluation) => !e.limits.some((l) => l.isHard && l.checkKind === 'rating' && l.verdict === 'fail');
 
-const failures = (c: Omit<RankedCandidate, 'rank'>) => c.evaluation.limits.filter((l) => l.isHard && l.verdict === 'fail').length;
+function failures(e: PartEvaluation): number {
+  let n = 0;
+  for (const l of e.limits) if (l.isHard && l.verdict === 'fail') n++;
+  return n;
+}
+
 /** The worst headroom among the failed limits: nearer zero is closer to passing. */
-const closeness = (c: Omit<RankedCandidate, 'rank'>) =>
-  Math.min(0, ...c.evaluation.limits.filter((l) => l.verdict === 'fail' && l.headroom !== null).map((l) => l.headroom!));
+function closeness(e: PartEvaluation): number {
+  let worst = 0;
+  for (const l of e.limits) if (l.verdict === 'fail' && l.headroom !== null) worst = Math.min(worst, l.headroom);
+  return worst;
+}
 
 /** Maker, then part number, by code point: the catalog's canonical order. */
 export function compareIdentity(a: Part, b: Part): number {

@@ -57,9 +57,10 @@ export function approvalTerm(part: Part): ScoreTerm {
   return { points: APPROVAL_POINTS[part.approval], reason: part.approval + (part.approvalNote ? `: ${part.approvalNote}` : '') };
 }
 
+const LIFECYCLE_WORDS: Readonly<Record<Lifecycle, string>> = { active: 'active', nrnd: 'not recommended for new designs', obsolete: 'obsolete' };
+
 export function lifecycleTerm(part: Part): ScoreTerm {
-  const reason = { active: 'active', nrnd: 'not recommended for new designs', obsolete: 'obsolete' }[part.lifecycle];
-  return { points: LIFECYCLE_POINTS[part.lifecycle], reason };
+  return { points: LIFECYCLE_POINTS[part.lifecycle], reason: LIFECYCLE_WORDS[part.lifecycle] };
 }
 
 /** Log price range per currency ('' for prices without one): prices compare only within a currency. */

@@ -45,7 +45,8 @@ export function solveThermal(part: Part, position: SolvedPosition, policy: Derat
   if (!isExplaining && provesRunaway(built.model, op.ambientMaxK, board.rthJaKPerW, tjMaxK)) {
     return { ...base, ...board, outcome: { kind: 'runaway', message: '' }, losses: built.model.at(tjMaxK), notes };
   }
-  const result = solveJunctionTemperature({ lossAt: built.model.totalAt, ambientK: op.ambientMaxK, rthJaKPerW: board.rthJaKPerW, tjMaxK });
+  // The model's lower bound lets the solver's bracketing scan skip what cannot hold a balance.
+  const result = solveJunctionTemperature({ lossAt: built.model.totalAt, lossBound: built.model, ambientK: op.ambientMaxK, rthJaKPerW: board.rthJaKPerW, tjMaxK });
   if (result.kind === 'stable') {
     return { ...base, ...board, outcome: { kind: 'stable', tjK: result.tjK, stabilityMargin: result.stabilityMargin }, losses: built.model.at(result.tjK), notes };
   }

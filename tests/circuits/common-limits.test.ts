@@ -107,7 +107,7 @@ describe('rectifyingLimits', () => {
 
 describe('condition helpers', () => {
   const schema = z
-    .object({ vin_min: requiredQuantity('voltage', { positive: true }), vin_max: requiredQuantity('voltage', { positive: true }), ...ambientShape })
+    .object({ vin_min: requiredQuantity('voltage', { positive: true }), vin_max: requiredQuantity('voltage', { positive: true }), ...ambientShape() })
     .strict()
     .superRefine((c, ctx) => checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage'));
   const issues = (input: unknown) => {

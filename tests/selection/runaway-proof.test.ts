@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { compileLoss } from '../../src/selection/loss-function.js';
 import type { LossModel } from '../../src/selection/loss-model.js';
 import { provesRunaway } from '../../src/selection/runaway-proof.js';
 
@@ -61,5 +62,42 @@ describe('provesRunaway', () => {
     const steady = model([], 0.05, 0, 0);
     expect(provesRunaway(hot, 343.15, 60, 423.15)).toBe(true);
     expect(provesRunaway(steady, 343.15, 60, 423.15)).toBe(false);
+  });
+
+  it('agrees with the plain cell walk on compiled loss functions, whose stretches it tries first', () => {
+    let proved = 0;
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 250, max: 480, noNaN: true }), { maxLength: 6 }),
+        fc.array(fc.double({ min: 250, max: 480, noNaN: true }), { maxLength: 6 }),
+        fc.double({ min: 0.05, max: 5, noNaN: true }),
+        fc.double({ min: 0, max: 3, noNaN: true }),
+        fc.double({ min: -0.003, max: 0.001, noNaN: true }),
+        fc.double({ min: 0.02, max: 0.12, noNaN: true }),
+        fc.double({ min: 0, max: 0.5, noNaN: true }),
+        fc.double({ min: 253, max: 400, noNaN: true }),
+        fc.double({ min: 5, max: 300, noNaN: true }),
+        fc.double({ min: 300, max: 470, noNaN: true }),
+        (vfBreaks, irBreaks, avgA, ripple, tempcoVPerK, lnSlope, switchingW, ambientK, rth, tjMaxK) => {
+          // Kinks at the breakpoints, as the datasheet estimates have; compileLoss fits each stretch.
+          const kinks = (t: number, at: number[]) => at.filter((b) => b < t).length;
+          const f = compileLoss({
+            conduction: {
+              avgA, conductingA: avgA, peakA: avgA * (1 + ripple), rmsA: avgA * (1 + ripple / 3),
+              vfAt: (ifA, t) => 0.3 + 0.05 * Math.log(ifA) + tempcoVPerK * (t - 300) + 0.01 * kinks(t, vfBreaks), breakpoints: vfBreaks,
+            },
+            reverse: { vrV: 40, duty: 0.6, lnIrAt: (t) => Math.log(1e-5) + lnSlope * (t - 300) - 0.2 * kinks(t, irBreaks), breakpoints: irBreaks },
+            switchingW,
+          });
+          const m: LossModel = { ...f, describe: () => [], at: (t) => ({ conductionW: 0, reverseW: 0, switchingW: 0, totalW: f.totalAt(t) }) };
+          const expected = reference(m, ambientK, rth, tjMaxK);
+          if (expected && tjMaxK > ambientK) proved++;
+          expect(provesRunaway(m, ambientK, rth, tjMaxK)).toBe(expected);
+        },
+      ),
+      { numRuns: 3000 },
+    );
+    // Enough runaways among the cases for the comparison to mean something.
+    expect(proved).toBeGreaterThan(300);
   });
 });

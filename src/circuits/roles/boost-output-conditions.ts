@@ -4,30 +4,33 @@ import { q } from '../derivation.js';
 import type { RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape } from './common-limits.js';
 import { checkConverterRanges, checkVoutMax, converterShape } from './converter-conditions.js';
+import { lazySchema } from './lazy-schema.js';
 
-export const boostOutputSchema = z
-  .object({
-    ...converterShape,
-    inductance: quantitySchema('inductance', { positive: true }).optional(),
-    ripple_fraction: quantitySchema('ratio', { min: 0.01, max: 1.5 }).default(0.3),
-    ringing_allowance: quantitySchema('ratio', { min: 0, max: 2 }).default(0.2),
-    output_capacitance: quantitySchema('capacitance', { positive: true }).optional(),
-    source_resistance: quantitySchema('resistance', { positive: true }).optional(),
-    ...ambientShape,
-  })
-  .strict()
-  .superRefine((c, ctx) => {
-    checkConverterRanges(ctx, c);
-    if (c.vin_max > c.vout) {
-      ctx.addIssue({ code: 'custom', path: ['vin_max'], message: `vin_max ${q(c.vin_max, 'voltage')} is above vout ${q(c.vout, 'voltage')}: a boost converter cannot regulate below its input` });
-    }
-    checkVoutMax(ctx, c);
-    if (c.output_capacitance !== undefined && c.inductance === undefined && c.source_resistance === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['output_capacitance'], message: 'output_capacitance needs inductance or source_resistance to bound the start-up inrush' });
-    }
-  });
+export const boostOutputSchema = lazySchema(() =>
+  z
+    .object({
+      ...converterShape(),
+      inductance: quantitySchema('inductance', { positive: true }).optional(),
+      ripple_fraction: quantitySchema('ratio', { min: 0.01, max: 1.5 }).default(0.3),
+      ringing_allowance: quantitySchema('ratio', { min: 0, max: 2 }).default(0.2),
+      output_capacitance: quantitySchema('capacitance', { positive: true }).optional(),
+      source_resistance: quantitySchema('resistance', { positive: true }).optional(),
+      ...ambientShape(),
+    })
+    .strict()
+    .superRefine((c, ctx) => {
+      checkConverterRanges(ctx, c);
+      if (c.vin_max > c.vout) {
+        ctx.addIssue({ code: 'custom', path: ['vin_max'], message: `vin_max ${q(c.vin_max, 'voltage')} is above vout ${q(c.vout, 'voltage')}: a boost converter cannot regulate below its input` });
+      }
+      checkVoutMax(ctx, c);
+      if (c.output_capacitance !== undefined && c.inductance === undefined && c.source_resistance === undefined) {
+        ctx.addIssue({ code: 'custom', path: ['output_capacitance'], message: 'output_capacitance needs inductance or source_resistance to bound the start-up inrush' });
+      }
+    }),
+);
 
-export type BoostOutputConditions = z.output<typeof boostOutputSchema>;
+export type BoostOutputConditions = z.output<ReturnType<typeof boostOutputSchema>>;
 
 export const BOOST_OUTPUT_INPUTS: readonly RoleInput[] = [
   { name: 'vin_min', label: 'Lowest input voltage', quantity: 'voltage', help: 'lowest input at which the converter must deliver full load' },

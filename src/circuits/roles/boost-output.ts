@@ -74,11 +74,13 @@ function solveBoost(c: BoostOutputConditions, policy: DeratingPolicy): SolveResu
   };
 }
 
-export const boostOutputRole: RoleDefinition<typeof boostOutputSchema> = {
+export const boostOutputRole: RoleDefinition<ReturnType<typeof boostOutputSchema>> = {
   id: 'boost-output',
   title: 'Boost converter output diode',
   summary: 'The output diode of a non-synchronous boost converter in continuous conduction: reverse voltage at the highest output, peak current at the lowest input, start-up inrush into the output capacitor.',
   inputs: BOOST_OUTPUT_INPUTS,
-  schema: boostOutputSchema,
+  get schema() {
+    return boostOutputSchema();
+  },
   solve: solveBoost,
 };

@@ -7,29 +7,32 @@ import type { OperatingPoint } from '../limits.js';
 import type { RoleDefinition, SolveResult } from '../role.js';
 import { AMBIENT_INPUTS, ambientFields, ambientShape, checkMinMax, infeasible, rectifyingLimits, requiredQuantity, switchingKinds, withAllowance } from './common-limits.js';
 import { ERICKSON, allowanceNote, schottkyLeakageNote, switchingLossNote } from './common-cautions.js';
+import { lazySchema } from './lazy-schema.js';
 
-export const buckFreewheelSchema = z
-  .object({
-    vin_min: requiredQuantity('voltage', { positive: true }),
-    vin_max: requiredQuantity('voltage', { positive: true }),
-    vout: requiredQuantity('voltage', { positive: true }),
-    iout: requiredQuantity('current', { positive: true }),
-    frequency: requiredQuantity('frequency', { positive: true }),
-    inductance: quantitySchema('inductance', { positive: true }).optional(),
-    ripple_fraction: quantitySchema('ratio', { min: 0.01, max: 1.5 }).default(0.3),
-    ringing_allowance: quantitySchema('ratio', { min: 0, max: 2 }).default(0.2),
-    ...ambientShape,
-  })
-  .strict()
-  .superRefine((c, ctx) => {
-    checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage');
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-    if (c.vout >= c.vin_max) {
-      ctx.addIssue({ code: 'custom', path: ['vout'], message: `vout ${q(c.vout, 'voltage')} is not below vin_max ${q(c.vin_max, 'voltage')}: a buck converter only steps down` });
-    }
-  });
+export const buckFreewheelSchema = lazySchema(() =>
+  z
+    .object({
+      vin_min: requiredQuantity('voltage', { positive: true }),
+      vin_max: requiredQuantity('voltage', { positive: true }),
+      vout: requiredQuantity('voltage', { positive: true }),
+      iout: requiredQuantity('current', { positive: true }),
+      frequency: requiredQuantity('frequency', { positive: true }),
+      inductance: quantitySchema('inductance', { positive: true }).optional(),
+      ripple_fraction: quantitySchema('ratio', { min: 0.01, max: 1.5 }).default(0.3),
+      ringing_allowance: quantitySchema('ratio', { min: 0, max: 2 }).default(0.2),
+      ...ambientShape(),
+    })
+    .strict()
+    .superRefine((c, ctx) => {
+      checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage');
+      checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
+      if (c.vout >= c.vin_max) {
+        ctx.addIssue({ code: 'custom', path: ['vout'], message: `vout ${q(c.vout, 'voltage')} is not below vin_max ${q(c.vin_max, 'voltage')}: a buck converter only steps down` });
+      }
+    }),
+);
 
-export type BuckFreewheelConditions = z.output<typeof buckFreewheelSchema>;
+export type BuckFreewheelConditions = z.output<ReturnType<typeof buckFreewheelSchema>>;
 
 function solveBuck(c: BuckFreewheelConditions, policy: DeratingPolicy): SolveResult {
   const d = new Derivation();
@@ -111,7 +114,7 @@ function solveBuck(c: BuckFreewheelConditions, policy: DeratingPolicy): SolveRes
   };
 }
 
-export const buckFreewheelRole: RoleDefinition<typeof buckFreewheelSchema> = {
+export const buckFreewheelRole: RoleDefinition<ReturnType<typeof buckFreewheelSchema>> = {
   id: 'buck-freewheel',
   title: 'Buck converter freewheel (catch) diode',
   summary: 'The diode of a non-synchronous buck converter in continuous conduction: reverse voltage at the highest input, average, peak and RMS current, switching loss terms.',
@@ -126,6 +129,8 @@ export const buckFreewheelRole: RoleDefinition<typeof buckFreewheelSchema> = {
     { name: 'ringing_allowance', label: 'Ringing allowance', quantity: 'ratio', default: '20 %', help: 'added to vin_max for switch-node ringing and overshoot' },
     ...AMBIENT_INPUTS,
   ],
-  schema: buckFreewheelSchema,
+  get schema() {
+    return buckFreewheelSchema();
+  },
   solve: solveBuck,
 };

@@ -133,11 +133,13 @@ function coilCautions(c: CoilFreewheelConditions, f: CoilFigures): Caution[] {
   return cautions;
 }
 
-export const coilFreewheelRole: RoleDefinition<typeof coilFreewheelSchema> = {
+export const coilFreewheelRole: RoleDefinition<ReturnType<typeof coilFreewheelSchema>> = {
   id: 'coil-freewheel',
   title: 'Freewheel diode across a coil',
   summary: 'The diode across a relay, solenoid, valve or motor coil: reverse voltage, the release current pulse or the PWM freewheel current, decay time and the switch voltage with an optional series Zener.',
   inputs: COIL_FREEWHEEL_INPUTS,
-  schema: coilFreewheelSchema,
+  get schema() {
+    return coilFreewheelSchema();
+  },
   solve: solveCoil,
 };

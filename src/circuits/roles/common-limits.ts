@@ -29,12 +29,12 @@ const AMBIENT_RANGE: QuantitySchemaOptions = { min: ZERO_C_K - 100, max: ZERO_C_
 export const DEFAULT_AMBIENT_MIN_K = ZERO_C_K - 20;
 export const DEFAULT_AMBIENT_MAX_K = ZERO_C_K + 50;
 
-/** Conditions every role takes; spread into a role's z.object. */
-export const ambientShape = {
+/** Conditions every role takes; spread into a role's z.object (built with it, see lazy-schema.ts). */
+export const ambientShape = () => ({
   ambient_min: quantitySchema('temperature', AMBIENT_RANGE).default(DEFAULT_AMBIENT_MIN_K),
   ambient_max: quantitySchema('temperature', AMBIENT_RANGE).default(DEFAULT_AMBIENT_MAX_K),
   rth_ja: quantitySchema('thermal-resistance', { positive: true }).optional(),
-};
+});
 
 export const AMBIENT_INPUTS: readonly RoleInput[] = [
   { name: 'ambient_min', label: 'Lowest ambient', quantity: 'temperature', default: '-20 °C', help: 'coldest air around the part in operation' },

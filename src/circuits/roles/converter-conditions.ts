@@ -3,15 +3,15 @@ import { quantitySchema } from '../../units/quantity-schema.js';
 import { q } from '../derivation.js';
 import { checkMinMax, requiredQuantity } from './common-limits.js';
 
-/** The input, output and frequency every switching-converter role asks for. */
-export const converterShape = {
+/** The input, output and frequency every switching-converter role asks for (built with the role's schema). */
+export const converterShape = () => ({
   vin_min: requiredQuantity('voltage', { positive: true }),
   vin_max: requiredQuantity('voltage', { positive: true }),
   vout: requiredQuantity('voltage', { positive: true }),
   vout_max: quantitySchema('voltage', { positive: true }).optional(),
   iout: requiredQuantity('current', { positive: true }),
   frequency: requiredQuantity('frequency', { positive: true }),
-};
+});
 
 interface ConverterRanges {
   readonly vin_min: number;

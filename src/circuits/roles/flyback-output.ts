@@ -74,11 +74,13 @@ function solveFlyback(c: FlybackOutputConditions, policy: DeratingPolicy): Solve
   };
 }
 
-export const flybackOutputRole: RoleDefinition<typeof flybackOutputSchema> = {
+export const flybackOutputRole: RoleDefinition<ReturnType<typeof flybackOutputSchema>> = {
   id: 'flyback-output',
   title: 'Flyback converter output rectifier',
   summary: 'The secondary rectifier of a flyback converter (ccm or dcm): reverse voltage from the reflected input plus the spike, peak and RMS secondary current.',
   inputs: FLYBACK_OUTPUT_INPUTS,
-  schema: flybackOutputSchema,
+  get schema() {
+    return flybackOutputSchema();
+  },
   solve: solveFlyback,
 };

@@ -4,38 +4,41 @@ import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
 import { solvePolarityGuard } from './polarity-guard-solve.js';
+import { lazySchema } from './lazy-schema.js';
 
 const voltage = () => quantitySchema('voltage', { positive: true });
 const current = () => quantitySchema('current', { positive: true });
 
-export const polarityGuardSchema = z
-  .object({
-    mode: z.enum(['series', 'oring']).default('series'),
-    supply_max: requiredQuantity('voltage', { positive: true }),
-    reverse_max: voltage().optional(),
-    other_source_max: voltage().optional(),
-    load_max: requiredQuantity('current', { positive: true }),
-    load_peak: current().optional(),
-    peak_duration: quantitySchema('time', { positive: true }).optional(),
-    drop_max: voltage().optional(),
-    dissipation_max: quantitySchema('power', { positive: true }).optional(),
-    leakage_max: current().optional(),
-    ...ambientShape,
-  })
-  .strict()
-  .superRefine((c, ctx) => {
-    const fail = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-    if (c.load_peak !== undefined && c.load_peak < c.load_max) {
-      fail('load_peak', `load_peak ${formatQuantity(c.load_peak, 'current')} is below load_max ${formatQuantity(c.load_max, 'current')}`);
-    }
-    if (c.load_peak !== undefined && c.peak_duration === undefined) fail('peak_duration', 'peak_duration is required with load_peak');
-    if (c.load_peak === undefined && c.peak_duration !== undefined) fail('load_peak', 'load_peak is required with peak_duration');
-    if (c.mode === 'oring' && c.other_source_max === undefined) fail('other_source_max', 'other_source_max is required for mode: oring');
-    if (c.mode === 'series' && c.other_source_max !== undefined) fail('other_source_max', 'other_source_max applies only to mode: oring');
-  });
+export const polarityGuardSchema = lazySchema(() =>
+  z
+    .object({
+      mode: z.enum(['series', 'oring']).default('series'),
+      supply_max: requiredQuantity('voltage', { positive: true }),
+      reverse_max: voltage().optional(),
+      other_source_max: voltage().optional(),
+      load_max: requiredQuantity('current', { positive: true }),
+      load_peak: current().optional(),
+      peak_duration: quantitySchema('time', { positive: true }).optional(),
+      drop_max: voltage().optional(),
+      dissipation_max: quantitySchema('power', { positive: true }).optional(),
+      leakage_max: current().optional(),
+      ...ambientShape(),
+    })
+    .strict()
+    .superRefine((c, ctx) => {
+      const fail = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+      checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
+      if (c.load_peak !== undefined && c.load_peak < c.load_max) {
+        fail('load_peak', `load_peak ${formatQuantity(c.load_peak, 'current')} is below load_max ${formatQuantity(c.load_max, 'current')}`);
+      }
+      if (c.load_peak !== undefined && c.peak_duration === undefined) fail('peak_duration', 'peak_duration is required with load_peak');
+      if (c.load_peak === undefined && c.peak_duration !== undefined) fail('load_peak', 'load_peak is required with peak_duration');
+      if (c.mode === 'oring' && c.other_source_max === undefined) fail('other_source_max', 'other_source_max is required for mode: oring');
+      if (c.mode === 'series' && c.other_source_max !== undefined) fail('other_source_max', 'other_source_max applies only to mode: oring');
+    }),
+);
 
-export type PolarityGuardConditions = z.output<typeof polarityGuardSchema>;
+export type PolarityGuardConditions = z.output<ReturnType<typeof polarityGuardSchema>>;
 
 const inputs: readonly RoleInput[] = [
   { name: 'mode', label: 'Mode', choices: ['series', 'oring'], default: 'series', help: 'series: reverse-polarity guard in the supply feed; oring: one diode of a diode-OR of two sources' },
@@ -51,11 +54,13 @@ const inputs: readonly RoleInput[] = [
   ...AMBIENT_INPUTS,
 ];
 
-export const polarityGuardRole: RoleDefinition<typeof polarityGuardSchema> = {
+export const polarityGuardRole: RoleDefinition<ReturnType<typeof polarityGuardSchema>> = {
   id: 'polarity-guard',
   title: 'Reverse-polarity guard or OR-ing diode',
   summary: 'A diode in series with a supply: blocks a reversed supply, or ORs two sources onto one bus.',
   inputs,
-  schema: polarityGuardSchema,
+  get schema() {
+    return polarityGuardSchema();
+  },
   solve: solvePolarityGuard,
 };

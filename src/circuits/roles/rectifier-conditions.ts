@@ -2,46 +2,49 @@ import { z } from 'zod';
 import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
+import { lazySchema } from './lazy-schema.js';
 
 export const RECTIFIER_CONFIGURATIONS = ['half-wave', 'centre-tap', 'bridge'] as const;
 
 const configurationText = RECTIFIER_CONFIGURATIONS.join(', ');
 
-export const rectifierSchema = z
-  .object({
-    configuration: z.enum(RECTIFIER_CONFIGURATIONS, {
-      error: (issue) => (issue.input === undefined ? `required condition is missing: one of ${configurationText}` : `expected one of ${configurationText}`),
+export const rectifierSchema = lazySchema(() =>
+  z
+    .object({
+      configuration: z.enum(RECTIFIER_CONFIGURATIONS, {
+        error: (issue) => (issue.input === undefined ? `required condition is missing: one of ${configurationText}` : `expected one of ${configurationText}`),
+      }),
+      v_secondary_rms: requiredQuantity('voltage', { positive: true }),
+      line_tolerance: quantitySchema('ratio', { min: 0, max: 0.5 }).default(0.1),
+      frequency: quantitySchema('frequency', { positive: true }).default(50),
+      load_current: requiredQuantity('current', { positive: true }),
+      capacitance: quantitySchema('capacitance', { positive: true }).optional(),
+      ripple_max: quantitySchema('voltage', { positive: true }).optional(),
+      diode_drop: quantitySchema('voltage', { nonNegative: true, max: 5 }).default(1),
+      source_resistance: quantitySchema('resistance', { nonNegative: true }).default(0.5),
+      capacitor_esr: quantitySchema('resistance', { nonNegative: true }).default(0.05),
+      inrush_limiter: quantitySchema('resistance', { nonNegative: true }).default(0),
+      line_surge_peak: quantitySchema('voltage', { positive: true }).optional(),
+      is_mains_connected: z.boolean({ error: 'expected true or false' }).default(false),
+      ...ambientShape(),
+    })
+    .strict()
+    .superRefine((c, ctx) => {
+      checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
+      if (c.capacitance === undefined && c.ripple_max === undefined) {
+        ctx.addIssue({ code: 'custom', path: ['capacitance'], message: 'give capacitance (the filter capacitor) or ripple_max (the ripple you accept); neither is set' });
+      }
+      if (c.source_resistance + c.capacitor_esr + c.inrush_limiter <= 0) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['source_resistance'],
+          message: 'source_resistance, capacitor_esr and inrush_limiter add up to 0 Ω, so nothing limits the switch-on inrush; give the winding and line resistance',
+        });
+      }
     }),
-    v_secondary_rms: requiredQuantity('voltage', { positive: true }),
-    line_tolerance: quantitySchema('ratio', { min: 0, max: 0.5 }).default(0.1),
-    frequency: quantitySchema('frequency', { positive: true }).default(50),
-    load_current: requiredQuantity('current', { positive: true }),
-    capacitance: quantitySchema('capacitance', { positive: true }).optional(),
-    ripple_max: quantitySchema('voltage', { positive: true }).optional(),
-    diode_drop: quantitySchema('voltage', { nonNegative: true, max: 5 }).default(1),
-    source_resistance: quantitySchema('resistance', { nonNegative: true }).default(0.5),
-    capacitor_esr: quantitySchema('resistance', { nonNegative: true }).default(0.05),
-    inrush_limiter: quantitySchema('resistance', { nonNegative: true }).default(0),
-    line_surge_peak: quantitySchema('voltage', { positive: true }).optional(),
-    is_mains_connected: z.boolean({ error: 'expected true or false' }).default(false),
-    ...ambientShape,
-  })
-  .strict()
-  .superRefine((c, ctx) => {
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-    if (c.capacitance === undefined && c.ripple_max === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['capacitance'], message: 'give capacitance (the filter capacitor) or ripple_max (the ripple you accept); neither is set' });
-    }
-    if (c.source_resistance + c.capacitor_esr + c.inrush_limiter <= 0) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['source_resistance'],
-        message: 'source_resistance, capacitor_esr and inrush_limiter add up to 0 Ω, so nothing limits the switch-on inrush; give the winding and line resistance',
-      });
-    }
-  });
+);
 
-export type RectifierConditions = z.output<typeof rectifierSchema>;
+export type RectifierConditions = z.output<ReturnType<typeof rectifierSchema>>;
 
 export const RECTIFIER_INPUTS: readonly RoleInput[] = [
   { name: 'configuration', label: 'Configuration', choices: RECTIFIER_CONFIGURATIONS, help: 'half-wave (one diode), centre-tap (two diodes, centre-tapped winding) or bridge (four diodes)' },

@@ -149,11 +149,13 @@ function rectifierCautions(c: RectifierConditions, vsPk: number, vp: number, x: 
   return cautions;
 }
 
-export const rectifierRole: RoleDefinition<typeof rectifierSchema> = {
+export const rectifierRole: RoleDefinition<ReturnType<typeof rectifierSchema>> = {
   id: 'rectifier',
   title: 'Rectifier with capacitor-input filter',
   summary: 'Mains or transformer rectifier (half-wave, centre-tap or bridge) feeding a reservoir capacitor: PIV at high line, peak and average diode currents, switch-on inrush.',
   inputs: RECTIFIER_INPUTS,
-  schema: rectifierSchema,
+  get schema() {
+    return rectifierSchema();
+  },
   solve: solveRectifier,
 };

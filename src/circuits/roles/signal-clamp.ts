@@ -3,33 +3,36 @@ import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
 import { solveSignalClamp } from './signal-clamp-solve.js';
+import { lazySchema } from './lazy-schema.js';
 
 const positive = { positive: true } as const;
 
-export const signalClampSchema = z
-  .object({
-    reverse_max: requiredQuantity('voltage', positive),
-    forward_peak: requiredQuantity('current', positive),
-    forward_avg: quantitySchema('current', positive).optional(),
-    cj_max: quantitySchema('capacitance', positive).optional(),
-    source_impedance: quantitySchema('resistance', positive).optional(),
-    bandwidth: quantitySchema('frequency', positive).optional(),
-    trr_max: quantitySchema('time', positive).optional(),
-    signal_frequency: quantitySchema('frequency', positive).optional(),
-    leakage_max: quantitySchema('current', positive).optional(),
-    ...ambientShape,
-  })
-  .strict()
-  .superRefine((c, ctx) => {
-    checkMinMax(ctx, c, 'forward_avg', 'forward_peak', 'current');
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-    if ((c.source_impedance === undefined) !== (c.bandwidth === undefined)) {
-      const [missing, with_] = c.bandwidth === undefined ? ['bandwidth', 'source_impedance'] : ['source_impedance', 'bandwidth'];
-      ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${with_}: together they bound Cj` });
-    }
-  });
+export const signalClampSchema = lazySchema(() =>
+  z
+    .object({
+      reverse_max: requiredQuantity('voltage', positive),
+      forward_peak: requiredQuantity('current', positive),
+      forward_avg: quantitySchema('current', positive).optional(),
+      cj_max: quantitySchema('capacitance', positive).optional(),
+      source_impedance: quantitySchema('resistance', positive).optional(),
+      bandwidth: quantitySchema('frequency', positive).optional(),
+      trr_max: quantitySchema('time', positive).optional(),
+      signal_frequency: quantitySchema('frequency', positive).optional(),
+      leakage_max: quantitySchema('current', positive).optional(),
+      ...ambientShape(),
+    })
+    .strict()
+    .superRefine((c, ctx) => {
+      checkMinMax(ctx, c, 'forward_avg', 'forward_peak', 'current');
+      checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
+      if ((c.source_impedance === undefined) !== (c.bandwidth === undefined)) {
+        const [missing, with_] = c.bandwidth === undefined ? ['bandwidth', 'source_impedance'] : ['source_impedance', 'bandwidth'];
+        ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${with_}: together they bound Cj` });
+      }
+    }),
+);
 
-export type SignalClampConditions = z.output<typeof signalClampSchema>;
+export type SignalClampConditions = z.output<ReturnType<typeof signalClampSchema>>;
 
 const inputs: readonly RoleInput[] = [
   { name: 'reverse_max', label: 'Reverse voltage, maximum', quantity: 'voltage', help: 'highest reverse voltage across the diode' },
@@ -44,11 +47,13 @@ const inputs: readonly RoleInput[] = [
   ...AMBIENT_INPUTS,
 ];
 
-export const signalClampRole: RoleDefinition<typeof signalClampSchema> = {
+export const signalClampRole: RoleDefinition<ReturnType<typeof signalClampSchema>> = {
   id: 'signal-clamp',
   title: 'Small-signal clamp or steering diode',
   summary: 'A small diode that clamps an input to a rail or steers a signal: reverse voltage, current, capacitance, recovery and leakage.',
   inputs,
-  schema: signalClampSchema,
+  get schema() {
+    return signalClampSchema();
+  },
   solve: solveSignalClamp,
 };

@@ -4,45 +4,48 @@ import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
 import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
 import { solveZenerRegulator } from './zener-regulator-solve.js';
+import { lazySchema } from './lazy-schema.js';
 
 const positiveVoltage = { positive: true } as const;
 /** Tolerances above 20 % are typos (5 written as 5 instead of 5 %); the series stop at 20 %. */
 const tolerance = () => quantitySchema('ratio', { nonNegative: true, max: 0.2 });
 
-export const zenerRegulatorSchema = z
-  .object({
-    vin_min: requiredQuantity('voltage', positiveVoltage),
-    vin_max: requiredQuantity('voltage', positiveVoltage),
-    vz: requiredQuantity('voltage', positiveVoltage),
-    tolerance: tolerance().default(0.05),
-    // Zener tempcos stay within about ±0.1 %/K; ±0.2 %/K catches unit slips (mV/K typed as %/K).
-    tempco: quantitySchema('tempco', { min: -2e-3, max: 2e-3 }).optional(),
-    load_min: quantitySchema('current', { nonNegative: true }).default(0),
-    load_max: requiredQuantity('current', { nonNegative: true }),
-    iz_min: quantitySchema('current', { positive: true }).default(1e-3),
-    resistor_tolerance: tolerance().default(0.05),
-    resistor: quantitySchema('resistance', { positive: true }).optional(),
-    zzt: quantitySchema('resistance', { nonNegative: true }).optional(),
-    vout_min: quantitySchema('voltage', positiveVoltage).optional(),
-    vout_max: quantitySchema('voltage', positiveVoltage).optional(),
-    ...ambientShape,
-  })
-  .strict()
-  .superRefine((c, ctx) => {
-    checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage');
-    checkMinMax(ctx, c, 'load_min', 'load_max', 'current');
-    checkMinMax(ctx, c, 'vout_min', 'vout_max', 'voltage');
-    checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-    if ((c.vout_min === undefined) !== (c.vout_max === undefined)) {
-      const missing = c.vout_min === undefined ? 'vout_min' : 'vout_max';
-      ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${missing === 'vout_min' ? 'vout_max' : 'vout_min'}: give the allowed output window as both` });
-    } else if (c.vout_min !== undefined && c.vout_max !== undefined && (c.vz < c.vout_min || c.vz > c.vout_max)) {
-      const v = (x: number) => formatQuantity(x, 'voltage');
-      ctx.addIssue({ code: 'custom', path: ['vz'], message: `vz ${v(c.vz)} is outside the window vout_min ${v(c.vout_min)} … vout_max ${v(c.vout_max)}` });
-    }
-  });
+export const zenerRegulatorSchema = lazySchema(() =>
+  z
+    .object({
+      vin_min: requiredQuantity('voltage', positiveVoltage),
+      vin_max: requiredQuantity('voltage', positiveVoltage),
+      vz: requiredQuantity('voltage', positiveVoltage),
+      tolerance: tolerance().default(0.05),
+      // Zener tempcos stay within about ±0.1 %/K; ±0.2 %/K catches unit slips (mV/K typed as %/K).
+      tempco: quantitySchema('tempco', { min: -2e-3, max: 2e-3 }).optional(),
+      load_min: quantitySchema('current', { nonNegative: true }).default(0),
+      load_max: requiredQuantity('current', { nonNegative: true }),
+      iz_min: quantitySchema('current', { positive: true }).default(1e-3),
+      resistor_tolerance: tolerance().default(0.05),
+      resistor: quantitySchema('resistance', { positive: true }).optional(),
+      zzt: quantitySchema('resistance', { nonNegative: true }).optional(),
+      vout_min: quantitySchema('voltage', positiveVoltage).optional(),
+      vout_max: quantitySchema('voltage', positiveVoltage).optional(),
+      ...ambientShape(),
+    })
+    .strict()
+    .superRefine((c, ctx) => {
+      checkMinMax(ctx, c, 'vin_min', 'vin_max', 'voltage');
+      checkMinMax(ctx, c, 'load_min', 'load_max', 'current');
+      checkMinMax(ctx, c, 'vout_min', 'vout_max', 'voltage');
+      checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
+      if ((c.vout_min === undefined) !== (c.vout_max === undefined)) {
+        const missing = c.vout_min === undefined ? 'vout_min' : 'vout_max';
+        ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${missing === 'vout_min' ? 'vout_max' : 'vout_min'}: give the allowed output window as both` });
+      } else if (c.vout_min !== undefined && c.vout_max !== undefined && (c.vz < c.vout_min || c.vz > c.vout_max)) {
+        const v = (x: number) => formatQuantity(x, 'voltage');
+        ctx.addIssue({ code: 'custom', path: ['vz'], message: `vz ${v(c.vz)} is outside the window vout_min ${v(c.vout_min)} … vout_max ${v(c.vout_max)}` });
+      }
+    }),
+);
 
-export type ZenerRegulatorConditions = z.output<typeof zenerRegulatorSchema>;
+export type ZenerRegulatorConditions = z.output<ReturnType<typeof zenerRegulatorSchema>>;
 
 const inputs: readonly RoleInput[] = [
   { name: 'vin_min', label: 'Input, minimum', quantity: 'voltage', help: 'lowest voltage feeding the series resistor' },
@@ -61,11 +64,13 @@ const inputs: readonly RoleInput[] = [
   ...AMBIENT_INPUTS,
 ];
 
-export const zenerRegulatorRole: RoleDefinition<typeof zenerRegulatorSchema> = {
+export const zenerRegulatorRole: RoleDefinition<ReturnType<typeof zenerRegulatorSchema>> = {
   id: 'zener-regulator',
   title: 'Zener shunt regulator or reference',
   summary: 'A Zener fed through a series resistor: sizes the resistor, the Zener current range and power, and the VZ window.',
   inputs,
-  schema: zenerRegulatorSchema,
+  get schema() {
+    return zenerRegulatorSchema();
+  },
   solve: solveZenerRegulator,
 };

@@ -6,7 +6,7 @@ import { withCatalog, type CatalogOptions } from '../catalog-session.js';
 import { auditHtml } from '../report/audit-html.js';
 import { auditMarkdown } from '../report/audit-markdown.js';
 import { loadDesign } from './design-file.js';
-import { teamPolicies } from './policies.js';
+import { teamPolicies } from './team-policies.js';
 
 export interface AuditOptions extends CatalogOptions {
   readonly report?: string;

@@ -1,5 +1,5 @@
+import { existsSync } from 'node:fs';
 import { findPolicy } from '../../circuits/derating.js';
-import { findPosition } from '../../circuits/design-file.js';
 import type { SolveResult } from '../../circuits/role.js';
 import { CatalogError } from '../../catalog/catalog-error.js';
 import { findCandidates, type CandidateSearch, type PinnedPlace } from '../../catalog/candidates.js';
@@ -7,9 +7,9 @@ import { findPart } from '../../catalog/part-repository.js';
 import { listTeamPolicies } from '../../catalog/policy-repository.js';
 import type { Part } from '../../parts/index.js';
 import { UsageError } from '../cli-error.js';
-import { withCatalog, type CatalogOptions } from '../catalog-session.js';
+import { catalogPathFor, openCatalogFor, type CatalogOptions } from '../catalog-session.js';
 import { loadDesign } from './design-file.js';
-import { runSolve } from './solve.js';
+import { designPosition, solveDesignPosition } from './solve.js';
 
 export interface PickOptions extends CatalogOptions {
   readonly top?: string;
@@ -41,6 +41,8 @@ export interface PickOutcome {
 }
 
 const MAX_TOP = 200;
+/** SQLite page-cache pages (16 KiB each) for the one search a command runs. */
+const ONE_SHOT_CACHE_PAGES = 16;
 
 function parseTop(text: string | undefined): number {
   if (text === undefined) return 10;
@@ -69,15 +71,22 @@ function lookUp(catalog: Parameters<typeof findPart>[0], reference: string): { p
 export function runPick(file: string, ref: string | undefined, options: PickOptions = {}): PickOutcome {
   const top = parseTop(options.top);
   const packagePreference = parsePackages(options.package);
-  const solved = runSolve(file, ref, options);
-  const base = { design: solved.design, ref: solved.ref, role: solved.role, policy: solved.policy, top, result: solved.result };
-  if (!solved.result.ok) return base;
-  const position = solved.result.position;
-  const reference = findPosition(loadDesign(file), solved.ref)?.part;
-  return withCatalog(options, (catalog) => {
+  const design = loadDesign(file);
+  const designed = designPosition(file, design, ref);
+  // One connection serves the team policies and the search. Without a catalog the position is
+  // still solved, so an infeasible design is reported rather than the missing catalog.
+  let catalog = existsSync(catalogPathFor(options)) ? openCatalogFor(options) : undefined;
+  try {
+    const solved = solveDesignPosition(file, design, designed, catalog ? listTeamPolicies(catalog) : []);
+    const base = { design: solved.design, ref: solved.ref, role: solved.role, policy: solved.policy, top, result: solved.result };
+    if (!solved.result.ok) return base;
+    catalog ??= openCatalogFor(options);
+    // A command reads each page about once: a small page cache reuses its memory instead of
+    // touching fresh memory for every page read, which costs more than the read (bench/README.md).
+    catalog.db.pragma(`cache_size = ${ONE_SHOT_CACHE_PAGES}`);
     const policy = findPolicy(solved.policy, listTeamPolicies(catalog))!;
-    const assigned = reference ? lookUp(catalog, reference) : undefined;
-    const { pinned, ...search } = findCandidates(catalog, position, policy, {
+    const assigned = designed.part ? lookUp(catalog, designed.part) : undefined;
+    const { pinned, ...search } = findCandidates(catalog, solved.result.position, policy, {
       wanted: top,
       includeBanned: Boolean(options.includeBanned),
       includeObsolete: Boolean(options.includeObsolete),
@@ -85,7 +94,9 @@ export function runPick(file: string, ref: string | undefined, options: PickOpti
       packagePreference,
       pinned: assigned?.part ? [assigned.part] : [],
     });
-    if (!reference) return { ...base, search };
-    return { ...base, search, assigned: { reference, place: pinned[0] ?? null, ...(assigned?.problem ? { problem: assigned.problem } : {}) } };
-  });
+    if (!designed.part) return { ...base, search };
+    return { ...base, search, assigned: { reference: designed.part, place: pinned[0] ?? null, ...(assigned?.problem ? { problem: assigned.problem } : {}) } };
+  } finally {
+    catalog?.close();
+  }
 }

@@ -1,28 +1,15 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { parse as parseYaml } from 'yaml';
 import { BUILT_IN_POLICIES, type DeratingPolicy } from '../../circuits/derating.js';
-import { openCatalog } from '../../catalog/open-catalog.js';
-import { listTeamPolicies } from '../../catalog/policy-repository.js';
 import { saveTeamPolicy } from '../../catalog/save-team-policy.js';
 import { UsageError } from '../cli-error.js';
-import { catalogPathFor, withCatalog, type CatalogOptions } from '../catalog-session.js';
+import { withCatalog, type CatalogOptions } from '../catalog-session.js';
 import { changeAuthor } from '../user-name.js';
+import { teamPolicies } from './team-policies.js';
 
 export interface PolicyListing {
   readonly policy: DeratingPolicy;
   readonly isBuiltIn: boolean;
-}
-
-/** Team policies from the catalog when there is one; a missing catalog just means none. */
-export function teamPolicies(options: CatalogOptions): DeratingPolicy[] {
-  const path = catalogPathFor(options);
-  if (!existsSync(path)) return [];
-  const catalog = openCatalog(path, { create: false });
-  try {
-    return listTeamPolicies(catalog);
-  } finally {
-    catalog.close();
-  }
 }
 
 export function runPolicyList(options: CatalogOptions): PolicyListing[] {

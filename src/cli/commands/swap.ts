@@ -5,7 +5,7 @@ import { UsageError } from '../cli-error.js';
 import { withCatalog, type CatalogOptions } from '../catalog-session.js';
 import { runSolve } from './solve.js';
 import { findPolicy } from '../../circuits/derating.js';
-import { teamPolicies } from './policies.js';
+import { teamPolicies } from './team-policies.js';
 
 export interface SwapOptions extends CatalogOptions {
   readonly design?: string;
