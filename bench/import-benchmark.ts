@@ -18,7 +18,7 @@ import { csvPath, mb, median, outDirectory, readArgs } from './bench-paths.js';
 const { words, flags } = readArgs(process.argv.slice(2));
 const runs = Number(flags.get('runs') ?? 3);
 const cliRuns = Number(flags.get('cli-runs') ?? 3);
-const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.js');
+const cli = resolve(fileURLToPath(import.meta.url), '..', '..', 'src', 'cli', 'launch.cjs');
 const seconds = (ms: number) => (ms / 1000).toFixed(2).padStart(7);
 const load = () => loadavg().map((x) => x.toFixed(1)).join(' ');
 

@@ -10,7 +10,6 @@ import { BulkAdditions } from './bulk-additions.js';
 import { addFieldValues } from './field-values.js';
 import { judgeIncoming, type StoredPart } from './import-conflicts-check.js';
 import type { ReadSummary, RowBatch, RowGroup } from './row-collector.js';
-import { shapeRowDigest } from './row-digest.js';
 import { APPROVAL_AT, APPROVAL_NOTE_AT, DIGEST_AT, MANUFACTURER_AT, PART_NUMBER_AT, WRITE_COLUMNS, identityOf, type SqlValue } from './row-values.js';
 import { useRollbackJournal } from './rollback-journal.js';
 import { deferredRebuild, type SchemaRebuild } from './schema-rebuild.js';
@@ -122,9 +121,6 @@ export class PartWriter {
     const columns = this.shapes[group.shape]!;
     const width = columns.length;
     const rows = group.lines.length;
-    // The rows' baselines (row-values.ts): each row's digest slot, computed here.
-    const digestSlot = columns.indexOf(DIGEST_AT);
-    for (let r = 0, offset = 0; r < rows; r++, offset += width) group.values[offset + digestSlot] = shapeRowDigest(columns, group.values, offset, ROW_COLUMNS.length);
     if (this.bulk && this.conflicts.length === 0 && !this.matchesStored(group, columns)) {
       // Only new parts (always so in an empty catalog): the whole group in one statement.
       this.statements.insert(columns, rows).run(group.values);

@@ -4,7 +4,9 @@ import { cellCountIssue, checkCsvHeader, emptyFileIssue, unreadableIssue } from 
 import { CsvTokenizer, type CsvProblem } from './csv-tokenizer.js';
 import { compileRowDecoder, decodeByReference, type DecodedRecord } from './row-decoder.js';
 import { FileIdentities } from './file-identities.js';
-import { type SqlValue } from './row-values.js';
+import { ROW_COLUMNS } from '../part-rows.js';
+import { rowDigest } from './row-digest.js';
+import { DIGEST_AT, type SqlValue } from './row-values.js';
 
 /*
  * The reading side of an import: CSV text in, checked rows out, in batches a writer can insert
@@ -182,6 +184,8 @@ export class RowCollector {
       this.issues.push(refused);
       return;
     }
+    // The row's import baseline (row-values.ts).
+    values[DIGEST_AT] = rowDigest(values, ROW_COLUMNS.length);
     // The shape as a number: one bit per column (WRITE_COLUMNS has fewer than 53).
     let mask = 0;
     for (let i = 0, bit = 1; i < values.length; i++, bit *= 2) if (values[i] !== null) mask += bit;

@@ -110,7 +110,7 @@ export function compileRowDecoder(columns: readonly string[], isReusing = false)
     for (let k = 0; k < CHECKED_KEYS.length; k++) checked[CHECKED_KEYS[k]!] = values[CHECKED_AT[k]!] ?? undefined;
     if (checkPartConsistency(checked as never).length > 0) return defer();
     values[rowWidth] = searchKey(values[I.partNumber] as string);
-    values[rowWidth + 1] = 0; // the digest: the writer fills it in
+    values[rowWidth + 1] = 0; // the digest: the collector fills it in
     return { ok: true, values };
   };
 }

@@ -26,18 +26,6 @@ export function rowDigest(values: readonly SqlValue[], count = values.length): n
   return digestOf(count, (i) => values[i] ?? null);
 }
 
-/**
- * The same for one row of a shape group (row-collector.ts): the row's filled columns, ascending,
- * are `columns`, their values `values[offset …]`; every other column is NULL.
- */
-export function shapeRowDigest(columns: readonly number[], values: readonly SqlValue[], offset: number, count: number): number {
-  let k = 0;
-  return digestOf(count, (i) => {
-    if (columns[k] !== i) return null;
-    return values[offset + k++]!;
-  });
-}
-
 function digestOf(count: number, valueAt: (i: number) => SqlValue): number {
   let a = 0x811c9dc5;
   let b = 0x2545f491;

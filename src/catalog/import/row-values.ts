@@ -6,8 +6,8 @@ export type SqlValue = string | number | null;
 
 /**
  * What an import writes per part: the part's columns (part-rows.ts), then the two it derives. The
- * digest (row-digest.ts) is left 0 by the reading side and filled in by the writer, which has time
- * to spare while the reader works (bench/README.md, import).
+ * digest (row-digest.ts) is left 0 by the decoders and filled in by the collector, on the reading
+ * thread: the writing thread checks rows against each other instead (bench/README.md, import).
  */
 export const WRITE_COLUMNS: readonly string[] = [...ROW_COLUMNS, 'search_key', 'import_digest'];
 export const SEARCH_KEY_AT = ROW_COLUMNS.length;
