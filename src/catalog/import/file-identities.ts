@@ -1,7 +1,8 @@
 import type { RowIssue } from '../row-issue.js';
 import { FIELD_VALUE_COLUMNS } from './field-values.js';
 import type { RowBatch, RowGroup } from './row-collector.js';
-import { MANUFACTURER_AT, PART_NUMBER_AT, WRITE_COLUMNS, identityOf, type SqlValue } from './row-values.js';
+import { IdentityTable } from './identity-table.js';
+import { MANUFACTURER_AT, PART_NUMBER_AT, WRITE_COLUMNS, type SqlValue } from './row-values.js';
 import { TextTable } from './text-table.js';
 
 const FIELD_VALUE_AT = FIELD_VALUE_COLUMNS.map((c) => WRITE_COLUMNS.indexOf(c));
@@ -16,7 +17,7 @@ const ROW_AT = [MANUFACTURER_AT, PART_NUMBER_AT, ...FIELD_VALUE_AT];
  * reads (bench/README.md, import).
  */
 export class FileIdentities {
-  private readonly named = new TextTable<number>();
+  private readonly named = new IdentityTable();
   private readonly values = FIELD_VALUE_COLUMNS.map(() => new TextTable<true>());
 
   constructor(private readonly file: string) {}
@@ -29,7 +30,7 @@ export class FileIdentities {
   /** The row at `offset` in `values`, its columns at offset + at[…]: maker, number, then the field values. */
   private admitAt(values: readonly SqlValue[], offset: number, at: readonly number[], line: number): RowIssue | undefined {
     const partNumber = values[offset + at[1]!] as string;
-    const earlier = this.named.setIfAbsent(identityOf(values[offset + at[0]!] as string, partNumber), line);
+    const earlier = this.named.setIfAbsent(values[offset + at[0]!] as string, partNumber, line);
     if (earlier !== undefined) {
       return { file: this.file, line, column: 'part_number', value: partNumber, message: `the same manufacturer and part number as line ${earlier}`, expected: 'each part once per file' };
     }
