@@ -10,6 +10,8 @@ export class IdentityTable {
   /** Pairs (hash, entry), entry -1 for an empty slot: one cache line answers most probes. */
   private slots = new Int32Array(2 << 10).fill(-1);
   private readonly makers: string[] = [];
+  /** One copy of each maker's text: a file names a few dozen makers a million times. */
+  private readonly makerTexts = new Map<string, string>();
   private readonly numbers: string[] = [];
   private readonly lines: number[] = [];
 
@@ -24,7 +26,12 @@ export class IdentityTable {
       if (this.slots[2 * slot] === hash && sameFolded(this.makers[at]!, manufacturer) && sameFolded(this.numbers[at]!, partNumber)) return this.lines[at];
     }
     const at = this.lines.length;
-    this.makers.push(manufacturer);
+    let maker = this.makerTexts.get(manufacturer);
+    if (maker === undefined) {
+      maker = manufacturer;
+      if (this.makerTexts.size < 4096) this.makerTexts.set(maker, maker);
+    }
+    this.makers.push(maker);
     this.numbers.push(partNumber);
     this.lines.push(line);
     this.slots[2 * slot] = hash;
