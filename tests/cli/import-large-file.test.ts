@@ -25,6 +25,8 @@ describe('a large file imported through the reading worker', () => {
     expect(r.stderr).toContain(`${file}:40002 column part_number value "lt-0000004": the same manufacturer and part number as line 6 (expected each part once per file)`);
     const db = new Database(env.HEADROOM_CATALOG, { readonly: true });
     expect(db.prepare('SELECT count(*) FROM part').pluck().get()).toBe(0);
+    // The bulk path's rollback journal (rollback-journal.ts) is given back on failure too.
+    expect(db.pragma('journal_mode', { simple: true })).toBe('wal');
     db.close();
   });
 
