@@ -1,6 +1,7 @@
 import { partSchema } from '../parts/part-schema.js';
 import type { Catalog } from './open-catalog.js';
 import { ROW_COLUMNS, rowToPart, type PartRow } from './part-rows.js';
+import { plainSchemaWording } from '../parts/schema-wording.js';
 
 export interface CheckFinding {
   readonly check: 'sqlite-integrity' | 'part-schema' | 'history';
@@ -33,7 +34,7 @@ export function checkCatalog(catalog: Catalog, limit = 50): CatalogCheck {
   for (const row of db.prepare(`SELECT ${ROW_COLUMNS.join(', ')} FROM part`).iterate() as IterableIterator<PartRow>) {
     parts++;
     if (findings.length >= limit) continue;
-    const parsed = partSchema.safeParse(rowToPart(row));
+    const parsed = partSchema.safeParse(rowToPart(row), { error: plainSchemaWording });
     if (!parsed.success) {
       const issue = parsed.error.issues[0]!;
       findings.push({ check: 'part-schema', message: `${row.manufacturer} ${row.part_number}: ${issue.path.join('.')} ${issue.message}` });
