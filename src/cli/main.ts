@@ -79,6 +79,13 @@ function finish(code: number): void {
   if (process.stdout.writableLength === 0 && process.stderr.writableLength === 0) process.exit(code);
 }
 
+// A reader that stops early (`headroom catalog export | head`) closes the pipe: that is the end
+// of the output wanted, not an error to report with a stack trace.
+process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+  if (error.code !== 'EPIPE') throw error;
+  process.exit(process.exitCode === undefined ? 0 : Number(process.exitCode));
+});
+
 main(process.argv).then(
   finish,
   (error: unknown) => {
