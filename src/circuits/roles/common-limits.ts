@@ -61,6 +61,20 @@ export function checkMinMax(ctx: z.RefinementCtx, data: Record<string, unknown>,
   }
 }
 
+/**
+ * Two inputs that only mean something together: one without the other is an issue on the missing
+ * one, with `why` after it. True when both are given.
+ */
+export function requireTogether(ctx: z.RefinementCtx, data: Record<string, unknown>, a: string, b: string, why?: string): boolean {
+  const hasA = data[a] !== undefined;
+  const hasB = data[b] !== undefined;
+  if (hasA !== hasB) {
+    const [missing, given] = hasA ? [b, a] : [a, b];
+    ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${given}${why ? `: ${why}` : ''}` });
+  }
+  return hasA && hasB;
+}
+
 export function infeasible(d: Derivation, reason: string): SolveResult {
   return { ok: false, infeasible: { reason, steps: [...d.steps] } };
 }

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { formatQuantity } from '../../units/index.js';
 import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
-import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
+import { AMBIENT_INPUTS, ambientShape, checkMinMax, requireTogether, requiredQuantity } from './common-limits.js';
 import { solvePolarityGuard } from './polarity-guard-solve.js';
 import { lazySchema } from './lazy-schema.js';
 
@@ -31,8 +31,7 @@ export const polarityGuardSchema = lazySchema(() =>
       if (c.load_peak !== undefined && c.load_peak < c.load_max) {
         fail('load_peak', `load_peak ${formatQuantity(c.load_peak, 'current')} is below load_max ${formatQuantity(c.load_max, 'current')}`);
       }
-      if (c.load_peak !== undefined && c.peak_duration === undefined) fail('peak_duration', 'peak_duration is required with load_peak');
-      if (c.load_peak === undefined && c.peak_duration !== undefined) fail('load_peak', 'load_peak is required with peak_duration');
+      requireTogether(ctx, c, 'load_peak', 'peak_duration');
       if (c.mode === 'oring' && c.other_source_max === undefined) fail('other_source_max', 'other_source_max is required for mode: oring');
       if (c.mode === 'series' && c.other_source_max !== undefined) fail('other_source_max', 'other_source_max applies only to mode: oring');
     }),

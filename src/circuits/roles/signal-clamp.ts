@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
-import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
+import { AMBIENT_INPUTS, ambientShape, checkMinMax, requireTogether, requiredQuantity } from './common-limits.js';
 import { solveSignalClamp } from './signal-clamp-solve.js';
 import { lazySchema } from './lazy-schema.js';
 
@@ -25,10 +25,7 @@ export const signalClampSchema = lazySchema(() =>
     .superRefine((c, ctx) => {
       checkMinMax(ctx, c, 'forward_avg', 'forward_peak', 'current');
       checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-      if ((c.source_impedance === undefined) !== (c.bandwidth === undefined)) {
-        const [missing, with_] = c.bandwidth === undefined ? ['bandwidth', 'source_impedance'] : ['source_impedance', 'bandwidth'];
-        ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${with_}: together they bound Cj` });
-      }
+      requireTogether(ctx, c, 'source_impedance', 'bandwidth', 'together they bound Cj');
     }),
 );
 

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { formatQuantity } from '../../units/index.js';
 import { quantitySchema } from '../../units/quantity-schema.js';
 import type { RoleDefinition, RoleInput } from '../role.js';
-import { AMBIENT_INPUTS, ambientShape, checkMinMax, requiredQuantity } from './common-limits.js';
+import { AMBIENT_INPUTS, ambientShape, checkMinMax, requireTogether, requiredQuantity } from './common-limits.js';
 import { solveZenerRegulator } from './zener-regulator-solve.js';
 import { lazySchema } from './lazy-schema.js';
 
@@ -35,10 +35,8 @@ export const zenerRegulatorSchema = lazySchema(() =>
       checkMinMax(ctx, c, 'load_min', 'load_max', 'current');
       checkMinMax(ctx, c, 'vout_min', 'vout_max', 'voltage');
       checkMinMax(ctx, c, 'ambient_min', 'ambient_max', 'temperature');
-      if ((c.vout_min === undefined) !== (c.vout_max === undefined)) {
-        const missing = c.vout_min === undefined ? 'vout_min' : 'vout_max';
-        ctx.addIssue({ code: 'custom', path: [missing], message: `${missing} is required with ${missing === 'vout_min' ? 'vout_max' : 'vout_min'}: give the allowed output window as both` });
-      } else if (c.vout_min !== undefined && c.vout_max !== undefined && (c.vz < c.vout_min || c.vz > c.vout_max)) {
+      requireTogether(ctx, c, 'vout_min', 'vout_max', 'give the allowed output window as both');
+      if (c.vout_min !== undefined && c.vout_max !== undefined && (c.vz < c.vout_min || c.vz > c.vout_max)) {
         const v = (x: number) => formatQuantity(x, 'voltage');
         ctx.addIssue({ code: 'custom', path: ['vz'], message: `vz ${v(c.vz)} is outside the window vout_min ${v(c.vout_min)} … vout_max ${v(c.vout_max)}` });
       }
