@@ -1,20 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { solveJunctionTemperature } from '../../src/physics/index.js';
-import { compileLoss } from '../../src/selection/loss-function.js';
+import { kinkedLoss } from '../helpers/kinked-loss.js';
 
-/** A compiled loss with kinks at the breakpoints, as the datasheet estimates have. */
-function loss(vfBreaks: number[], irBreaks: number[], avgA: number, ripple: number, tempcoVPerK: number, lnSlope: number, switchingW: number) {
-  const kinks = (t: number, at: number[]) => at.filter((b) => b < t).length;
-  return compileLoss({
-    conduction: {
-      avgA, conductingA: avgA, peakA: avgA * (1 + ripple), rmsA: avgA * (1 + ripple / 3),
-      vfAt: (ifA, t) => 0.6 + 0.05 * Math.log(ifA) + tempcoVPerK * (t - 300) + 0.02 * kinks(t, vfBreaks), breakpoints: vfBreaks,
-    },
-    reverse: { vrV: 40, duty: 0.6, lnIrAt: (t) => Math.log(1e-6) + lnSlope * (t - 300) - 0.3 * kinks(t, irBreaks), breakpoints: irBreaks },
-    switchingW,
-  });
-}
+const SHAPE = { vf0V: 0.6, vfKinkV: 0.02, ir0A: 1e-6, lnIrKink: 0.3 };
+const loss = (vfBreaks: number[], irBreaks: number[], avgA: number, ripple: number, tempcoVPerK: number, lnSlope: number, switchingW: number) =>
+  kinkedLoss(SHAPE, vfBreaks, irBreaks, avgA, ripple, tempcoVPerK, lnSlope, switchingW);
 
 describe('the bracketing scan with a loss bound', () => {
   it('gives exactly the plain scan answer, iteration count included', () => {

@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { compileLoss } from '../../src/selection/loss-function.js';
 import type { LossModel } from '../../src/selection/loss-model.js';
 import { provesRunaway } from '../../src/selection/runaway-proof.js';
+import { kinkedLoss } from '../helpers/kinked-loss.js';
 
 // The cell walk as first written (sorted array of every cut), kept as the reference for the
 // allocation-free walk the ranking uses.
@@ -79,16 +79,8 @@ describe('provesRunaway', () => {
         fc.double({ min: 5, max: 300, noNaN: true }),
         fc.double({ min: 300, max: 470, noNaN: true }),
         (vfBreaks, irBreaks, avgA, ripple, tempcoVPerK, lnSlope, switchingW, ambientK, rth, tjMaxK) => {
-          // Kinks at the breakpoints, as the datasheet estimates have; compileLoss fits each stretch.
-          const kinks = (t: number, at: number[]) => at.filter((b) => b < t).length;
-          const f = compileLoss({
-            conduction: {
-              avgA, conductingA: avgA, peakA: avgA * (1 + ripple), rmsA: avgA * (1 + ripple / 3),
-              vfAt: (ifA, t) => 0.3 + 0.05 * Math.log(ifA) + tempcoVPerK * (t - 300) + 0.01 * kinks(t, vfBreaks), breakpoints: vfBreaks,
-            },
-            reverse: { vrV: 40, duty: 0.6, lnIrAt: (t) => Math.log(1e-5) + lnSlope * (t - 300) - 0.2 * kinks(t, irBreaks), breakpoints: irBreaks },
-            switchingW,
-          });
+          // Kinks at the breakpoints, as the datasheet estimates have; the compiled loss fits each stretch.
+          const f = kinkedLoss({ vf0V: 0.3, vfKinkV: 0.01, ir0A: 1e-5, lnIrKink: 0.2 }, vfBreaks, irBreaks, avgA, ripple, tempcoVPerK, lnSlope, switchingW);
           const m: LossModel = { ...f, describe: () => [], at: (t) => ({ conductionW: 0, reverseW: 0, switchingW: 0, totalW: f.totalAt(t) }) };
           const expected = reference(m, ambientK, rth, tjMaxK);
           if (expected && tjMaxK > ambientK) proved++;
