@@ -1,4 +1,3 @@
-import type BetterSqlite3 from 'better-sqlite3';
 import type { WriteStatements } from './write-statements.js';
 
 // Rows the bulk path adds to the full-text index at a time: few enough segments to merge, and a
@@ -17,7 +16,6 @@ export class BulkAdditions {
   private searchUpTo: number;
 
   constructor(
-    private readonly db: BetterSqlite3.Database,
     private readonly statements: WriteStatements,
     maxIdBefore: number,
     private readonly entry: { readonly at: string; readonly by: string; readonly reason: string },
@@ -28,7 +26,7 @@ export class BulkAdditions {
 
   /** Catches up with the rows written so far; `isLast` for the final rows of the import. */
   add(isLast = false): void {
-    const to = this.db.prepare('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
+    const to = this.statements.get('SELECT coalesce(max(id), 0) FROM part').pluck().get() as number;
     if (to > this.trailUpTo) {
       this.statements
         .get(

@@ -90,7 +90,7 @@ export class PartWriter {
       if (isBulk(countParts())) {
         const stored = new Map<string, StoredPart>();
         for (const part of this.statements.all()) stored.set(identityOf(String(part.values[MANUFACTURER_AT]), String(part.values[PART_NUMBER_AT])), part);
-        this.bulk = { rebuild: deferredRebuild(this.db), stored, additions: new BulkAdditions(this.db, this.statements, maxIdBefore, options) };
+        this.bulk = { rebuild: deferredRebuild(this.db), stored, additions: new BulkAdditions(this.statements, maxIdBefore, options) };
       } else {
         this.finishSearchIndex = deferSearchIndex(this.db, Number.MAX_SAFE_INTEGER);
       }
